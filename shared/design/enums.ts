@@ -1,23 +1,16 @@
 import { z } from 'zod'
+import { CONDUCTOR_SIZE_IDS } from '../conductors/sizes'
+import { MATERIAL_IDS } from '../conductors/materials'
 
-// TEMPORARY stand-ins for enums owned by other modules. Switch these imports to
-// `../conductors/sizes` (conductorSizeIdSchema), `../conductors/materials` (materialSchema) and
-// `../protection/ratings` (deviceFamilySchema) once those files land; the ids below are the ones
-// the design format documents, so the switch must keep them valid.
+// Enums the design format shares with other modules, wrapped with messages a person can act on.
+// The id lists come from their owners (shared/conductors); the device families are a TEMPORARY
+// stand-in until shared/protection/ratings.ts exports deviceFamilySchema — switch then.
 
-/** Conductor size ids: AWG gauges (ASTM B258 series) and metric sizes (IEC 60228 series). */
-export const CONDUCTOR_SIZE_IDS = [
-  'awg-18', 'awg-16', 'awg-14', 'awg-12', 'awg-10', 'awg-8', 'awg-6', 'awg-4', 'awg-3', 'awg-2', 'awg-1',
-  'awg-1/0', 'awg-2/0', 'awg-3/0', 'awg-4/0',
-  'mm2-0.5', 'mm2-0.75', 'mm2-1', 'mm2-1.5', 'mm2-2.5', 'mm2-4', 'mm2-6', 'mm2-10', 'mm2-16', 'mm2-25',
-  'mm2-35', 'mm2-50', 'mm2-70', 'mm2-95', 'mm2-120',
-] as const
 export const conductorSizeIdSchema = z.enum(CONDUCTOR_SIZE_IDS, {
   error: 'Choose a conductor size such as awg-10 or mm2-16',
 })
 
-export const MATERIALS = ['copper', 'tinned-copper', 'aluminium'] as const
-export const materialSchema = z.enum(MATERIALS, { error: 'Choose copper, tinned-copper or aluminium' })
+export const materialSchema = z.enum(MATERIAL_IDS, { error: 'Choose copper, tinned-copper or aluminium' })
 
 /** Generic protective-device families, named by standard or by plain description (no trade names). */
 export const DEVICE_FAMILIES = [
