@@ -1,0 +1,99 @@
+import type { Circuit } from './circuit'
+import { buildElementTable } from './_lib/elementTable'
+import { solveNodal } from './_lib/newton'
+import { buildNodalSystem, type NodalSystem } from './_lib/nodalSystem'
+import { circuitShapeError, prepareNetwork } from './_lib/prepareNetwork'
+
+export interface FaultLocation {
+  id: string
+  a: number
+  b: number
+}
+
+export interface FaultCurrent {
+  id: string
+  /** Thevenin resistance of the network between a and b; +Infinity when no source can feed the fault. */
+  resistanceOhm: number
+  /** Open-circuit (no-load) voltage V(a) − V(b). */
+  openCircuitV: number
+  /** Prospective current of a bolted fault: |Voc| / Rth (0 when no source can feed it). */
+  currentA: number
+}
+
+/**
+ * Prospective currents of bolted faults between node pairs. Loads are removed (constant-power
+ * and current sources off); batteries stay as EMF behind their internal resistance.
+ *
+ * One LDLᵀ factorisation serves every fault: Rth = wᵀ D⁻¹ w with w = L⁻¹(e_a − e_b). The
+ * right-hand side is sparse, so w is non-zero only on the elimination-tree paths from a and b to
+ * the root; each fault costs the length of those paths, which for radial networks ordered leaf
+ * first is about the depth of the distribution tree — near-linear in the number of faults.
+ *
+ * @example
+ * // 12 V battery with 0.01 Ω feeding a 0.02 Ω cable to node 2: Rth = 0.03 Ω, I = 400 A
+ * faultCurrents({ nodeCount: 3, elements: [
+ *   { kind: 'vsource', id: 'bat', pos: 1, neg: 0, voltageV: 12, resistanceOhm: 0.01 },
+ *   { kind: 'resistor', id: 'cable', a: 1, b: 2, resistanceOhm: 0.02 },
+ * ] }, [{ id: 'end', a: 2, b: 0 }]) // [{ id: 'end', resistanceOhm: 0.03, openCircuitV: 12, currentA: 400 }]
+ */
+export function faultCurrents(circuit: Circuit, faults: FaultLocation[]): FaultCurrent[] {
+  const none = (id: string): FaultCurrent => ({ id, resistanceOhm: Number.POSITIVE_INFINITY, openCircuitV: 0, currentA: 0 })
+  if (circuitShapeError(circuit) !== null) return faults.map((f) => none(f.id))
+  const { elements, nodeCount } = circuit
+  const prepared = prepareNetwork(circuit, (el) => el.kind === 'resistor' || el.kind === 'vsource')
+  const table = buildElementTable(elements, prepared.active)
+  const system = buildNodalSystem(nodeCount, elements, prepared.active, prepared.isUnknown)
+  const openCircuitV = new Float64Array(nodeCount)
+  // Without loads the system is linear: after this call system.factor holds L D Lᵀ of the network.
+  const outcome = solveNodal(system, table, openCircuitV, { maxIterations: 1, toleranceV: 1e-9, toleranceA: 1e-9 })
+  const factorUsable = outcome.factored && openCircuitV.every(Number.isFinite)
+  const { islandOfNode, islands } = prepared.islandMap
+  const rth = theveninSolver(system)
+
+  return faults.map(({ id, a, b }) => {
+    const inRange = (node: number) => Number.isInteger(node) && node >= 0 && node < nodeCount
+    if (!factorUsable || !inRange(a) || !inRange(b)) return none(id)
+    if (a === b) return { id, resistanceOhm: 0, openCircuitV: 0, currentA: 0 }
+    const island = islandOfNode[a]
+    if (island !== islandOfNode[b] || !islands[island].hasSource) return none(id)
+    const resistanceOhm = rth(system.unknownOfNode[a], system.unknownOfNode[b])
+    const voc = openCircuitV[a] - openCircuitV[b]
+    const currentA = resistanceOhm > 0 ? Math.abs(voc) / resistanceOhm : 0
+    return { id, resistanceOhm, openCircuitV: voc, currentA: Number.isFinite(currentA) ? currentA : 0 }
+  })
+}
+
+/** Rth between unknowns ua and ub (−1 for the grounded reference) by a sparse forward solve. */
+function theveninSolver(system: NodalSystem): (ua: number, ub: number) => number {
+  const { li, lx, d } = system.factor
+  const { parent, lp } = system.factor.symbolic
+  const w = new Float64Array(system.n)
+  const onPath = new Uint8Array(system.n)
+  const path: number[] = []
+  return (ua, ub) => {
+    path.length = 0
+    for (let j = ua; j >= 0 && !onPath[j]; j = parent[j]) {
+      onPath[j] = 1
+      path.push(j)
+    }
+    for (let j = ub; j >= 0 && !onPath[j]; j = parent[j]) {
+      onPath[j] = 1
+      path.push(j)
+    }
+    // Both walks climb in increasing column order; the forward solve needs them merged in that order.
+    path.sort((x, y) => x - y)
+    if (ua >= 0) w[ua] += 1
+    if (ub >= 0) w[ub] -= 1
+    let resistanceOhm = 0
+    for (const j of path) {
+      const wj = w[j]
+      if (wj !== 0) {
+        for (let p = lp[j]; p < lp[j + 1]; p++) w[li[p]] -= lx[p] * wj
+        resistanceOhm += (wj * wj) / d[j]
+      }
+      w[j] = 0
+      onPath[j] = 0
+    }
+    return resistanceOhm
+  }
+}
