@@ -137,7 +137,7 @@ export const PART_CATALOGUE: { [T in PartType]: PartTypeInfo<T> } = {
     description: 'Trips on overcurrent and can be reset; doubles as a switch for the circuit.',
     terminals: LINE_LOAD, paramsSchema: P.breakerParamsSchema,
     // Interrupting rating: a cautious figure for a thermal DC breaker (recalled, unverified); set it from the marking.
-    defaultParams: (s) => ({ family: 'breaker-sae-j553-type-iii', ratingA: 30, dcVoltageRatingV: s.nominalVoltageV >= 48 ? 58 : 32,
+    defaultParams: (s) => ({ family: 'breaker-thermal-3', ratingA: 30, dcVoltageRatingV: s.nominalVoltageV >= 48 ? 58 : 32,
       interruptingRatingA: 2000, ignitionProtected: false, closed: true, resistanceOhm: P.DEFAULT_CONTACT_RESISTANCE_OHM }),
   },
   'battery-switch': {
