@@ -1,0 +1,72 @@
+// The Express application, without listen(): main.ts and the tests start it on a port of their choice.
+import fs from 'node:fs'
+import path from 'node:path'
+import cookieParser from 'cookie-parser'
+import express, { type Express } from 'express'
+import type { AppConfig } from './config'
+import type { Db } from './db/client'
+import { createRequireSession } from './http/auth'
+import { errorMiddleware, notFound } from './http/errors'
+import { originCheck } from './http/origin'
+import type { RouteDeps } from './http/route-deps'
+import type { Mailer } from './mail/mailer'
+import { authRoutes } from './modules/auth/auth.routes'
+import { designsRoutes } from './modules/designs/designs.routes'
+import { invitationsRoutes } from './modules/invitations/invitations.routes'
+import { membersRoutes } from './modules/members/members.routes'
+import { outboxRoutes } from './modules/outbox/outbox.routes'
+import { projectsRoutes } from './modules/projects/projects.routes'
+
+export interface AppDeps {
+  db: Db
+  config: AppConfig
+  mailer: Mailer
+}
+
+export function createApp({ db, config, mailer }: AppDeps): Express {
+  const app = express()
+  app.disable('x-powered-by')
+  app.set('query parser', 'simple')
+  app.use((_req, res, next) => {
+    res.set({ 'X-Content-Type-Options': 'nosniff', 'Referrer-Policy': 'same-origin', 'X-Frame-Options': 'DENY' })
+    next()
+  })
+
+  const deps: RouteDeps = { db, config, mailer, requireSession: createRequireSession({ db, config }) }
+  const api = express.Router()
+  api.use(express.json({ limit: config.jsonBodyLimit }))
+  api.use(cookieParser())
+  api.use(originCheck(config))
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store')
+    next()
+  })
+  api.get('/health', (_req, res) => {
+    res.json({ ok: true })
+  })
+  api.use('/auth', authRoutes(deps))
+  api.use('/projects/:id/design', designsRoutes(deps))
+  api.use('/projects', projectsRoutes(deps))
+  api.use('/members', membersRoutes(deps))
+  api.use('/invitations', invitationsRoutes(deps))
+  api.use('/outbox', outboxRoutes(deps))
+  api.use(() => {
+    throw notFound('API route')
+  })
+  app.use('/api', api)
+
+  if (config.serveClient) serveClient(app, config.clientDir)
+  app.use(errorMiddleware)
+  return app
+}
+
+/** The built client (dist/) with an SPA fallback to index.html for every non-API path. */
+function serveClient(app: Express, clientDir: string): void {
+  const indexHtml = path.join(clientDir, 'index.html')
+  app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
+  app.get('/{*splat}', (_req, res, next) => {
+    if (!fs.existsSync(indexHtml)) return next(notFound('The client build (run `npx vite build`)'))
+    res.set('Cache-Control', 'no-cache')
+    res.sendFile(indexHtml)
+  })
+}

@@ -1,0 +1,158 @@
+// Tables of the application database. Migrations in drizzle/ are generated from this file
+// (`npx drizzle-kit generate`); never edit a generated migration by hand.
+import { sql } from 'drizzle-orm'
+import {
+  boolean,
+  check,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core'
+import { ROLES } from '../../shared/api/roles'
+import { INSTALLATION_KINDS } from '../../shared/api/projects.schemas'
+
+const createdAt = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow()
+const updatedAt = () => timestamp('updated_at', { withTimezone: true }).notNull().defaultNow()
+
+export const roleEnum = pgEnum('member_role', ROLES)
+export const installationKindEnum = pgEnum('installation_kind', INSTALLATION_KINDS)
+
+export const organizations = pgTable('organizations', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  name: text('name').notNull(),
+  createdAt: createdAt(),
+})
+
+export const users = pgTable('users', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  /** Always stored trimmed and lower-case (the shared schemas normalise it). */
+  email: text('email').notNull().unique(),
+  name: text('name').notNull(),
+  /** bcrypt hash (cost from config, 12). */
+  passwordHash: text('password_hash').notNull(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+})
+
+/** A user belongs to one organisation (unique user_id); the role is read on every request. */
+export const memberships = pgTable(
+  'memberships',
+  {
+    organizationId: uuid('organization_id')
+      .notNull()
+      .references(() => organizations.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    role: roleEnum('role').notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.organizationId, t.userId] }), uniqueIndex('memberships_user_idx').on(t.userId)],
+)
+
+export const projects = pgTable(
+  'projects',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organizationId: uuid('organization_id')
+      .notNull()
+      .references(() => organizations.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    clientName: text('client_name').notNull().default(''),
+    installationKind: installationKindEnum('installation_kind').notNull(),
+    nominalVoltageV: integer('nominal_voltage_v').notNull(),
+    notes: text('notes').notNull().default(''),
+    archived: boolean('archived').notNull().default(false),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index('projects_org_updated_idx').on(t.organizationId, t.updatedAt),
+    check('projects_voltage_check', sql`${t.nominalVoltageV} in (12, 24, 48)`),
+  ],
+)
+
+/** Which client members may see a project (other roles see every project of their organisation). */
+export const projectShares = pgTable(
+  'project_shares',
+  {
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.projectId, t.userId] }), index('project_shares_user_idx').on(t.userId)],
+)
+
+/** One design document per project; `revision` guards against lost updates (optimistic locking). */
+export const designs = pgTable('designs', {
+  projectId: uuid('project_id')
+    .primaryKey()
+    .references(() => projects.id, { onDelete: 'cascade' }),
+  document: jsonb('document').notNull(),
+  revision: integer('revision').notNull().default(1),
+  updatedAt: updatedAt(),
+  updatedBy: uuid('updated_by').references(() => users.id, { onDelete: 'set null' }),
+})
+
+export const invitations = pgTable(
+  'invitations',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organizationId: uuid('organization_id')
+      .notNull()
+      .references(() => organizations.id, { onDelete: 'cascade' }),
+    email: text('email').notNull(),
+    role: roleEnum('role').notNull(),
+    /** SHA-256 (hex) of the token sent by e-mail; the token itself is never stored. */
+    tokenHash: text('token_hash').notNull().unique(),
+    invitedBy: uuid('invited_by').references(() => users.id, { onDelete: 'set null' }),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    acceptedAt: timestamp('accepted_at', { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('invitations_org_idx').on(t.organizationId)],
+)
+
+export const passwordResets = pgTable(
+  'password_resets',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    tokenHash: text('token_hash').notNull().unique(),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    usedAt: timestamp('used_at', { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('password_resets_user_idx').on(t.userId)],
+)
+
+/** What the local fake SMTP server received (development and tests only). */
+export const outboxMessages = pgTable(
+  'outbox_messages',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    from: text('from').notNull(),
+    to: text('to').notNull(),
+    /** Lower-case recipient addresses, so an owner sees only mail sent to their organisation. */
+    recipients: text('recipients').array().notNull(),
+    subject: text('subject').notNull(),
+    text: text('text').notNull(),
+    html: text('html'),
+    receivedAt: timestamp('received_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('outbox_received_idx').on(t.receivedAt)],
+)

@@ -1,0 +1,12 @@
+import type { RequestHandler } from 'express'
+import type { AppConfig } from '../config'
+import type { Db } from '../db/client'
+import type { Mailer } from '../mail/mailer'
+
+/** What every feature router receives from createApp. */
+export interface RouteDeps {
+  db: Db
+  config: AppConfig
+  mailer: Mailer
+  requireSession: RequestHandler
+}
