@@ -1,0 +1,4 @@
+export * from './length'
+export * from './area'
+export * from './temperature'
+export * from './format'
