@@ -6,7 +6,7 @@ import express, { type Express } from 'express'
 import type { AppConfig } from './config'
 import type { Db } from './db/client'
 import { createRequireSession } from './http/auth'
-import { errorMiddleware, notFound } from './http/errors'
+import { errorMiddleware, HttpError, notFound } from './http/errors'
 import { originCheck } from './http/origin'
 import type { RouteDeps } from './http/route-deps'
 import type { Mailer } from './mail/mailer'
@@ -65,7 +65,9 @@ function serveClient(app: Express, clientDir: string): void {
   const indexHtml = path.join(clientDir, 'index.html')
   app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
   app.get('/{*splat}', (_req, res, next) => {
-    if (!fs.existsSync(indexHtml)) return next(notFound('The client build (run `npx vite build`)'))
+    if (!fs.existsSync(indexHtml)) {
+      return next(new HttpError(404, 'not_found', 'The client is not built yet: run `npx vite build`'))
+    }
     res.set('Cache-Control', 'no-cache')
     res.sendFile(indexHtml)
   })

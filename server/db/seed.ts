@@ -34,6 +34,7 @@ const SEED_LOCK_KEY = 4_127_001
 
 /** Inserts the demo organisation once; returns true if it did. */
 export async function seedDemoData(db: Db, options: { bcryptCost: number }): Promise<boolean> {
+  if (await findUserByEmail(db, DEMO_ACCOUNTS[0].email)) return false
   const passwordHash = await hashPassword(DEMO_PASSWORD, options.bcryptCost)
   return db.transaction(async (tx) => {
     await tx.execute(sql`select pg_advisory_xact_lock(${SEED_LOCK_KEY})`)
