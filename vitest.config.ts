@@ -10,7 +10,13 @@ export default mergeConfig(
       projects: [
         {
           extends: true,
-          test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' },
+          test: {
+            name: 'unit',
+            include: ['tests/unit/**/*.test.ts'],
+            environment: 'node',
+            // Vuetify's components import their CSS; inlining lets Vite (not Node) load them in component tests.
+            server: { deps: { inline: ['vuetify'] } },
+          },
         },
         {
           extends: true,
