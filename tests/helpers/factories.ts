@@ -5,7 +5,7 @@ import type { Role } from '../../shared/api/roles'
 import type { ProjectValues } from '../../server/modules/projects/projects.repository'
 import type { Db } from '../../server/db/client'
 import { insertMember, insertOrganization } from '../../server/modules/auth/users.repository'
-import { emptyDesignDocument } from '../../server/modules/designs/design-document'
+import { emptyDesignFor } from '../../server/modules/designs/design-document'
 import { insertProjectWithDesign } from '../../server/modules/projects/projects.repository'
 import { insertShare } from '../../server/modules/projects/project-shares.repository'
 import { hashPassword } from '../../server/security/passwords'
@@ -69,19 +69,20 @@ export async function createProject(
   organization: TestOrganization,
   values: Partial<ProjectValues> & { sharedWith?: TestUser[]; document?: unknown } = {},
 ): Promise<string> {
-  const { sharedWith = [], document = emptyDesignDocument(), ...rest } = values
+  const { sharedWith = [], document, ...rest } = values
+  const projectValues: ProjectValues = {
+    name: `Project ${randomUUID().slice(0, 6)}`,
+    clientName: 'Test client',
+    installationKind: 'vehicle',
+    nominalVoltageV: 12,
+    notes: '',
+    ...rest,
+  }
   const id = await insertProjectWithDesign(db, {
     organizationId: organization.id,
     createdBy: organization.owner.id,
-    values: {
-      name: `Project ${randomUUID().slice(0, 6)}`,
-      clientName: 'Test client',
-      installationKind: 'vehicle',
-      nominalVoltageV: 12,
-      notes: '',
-      ...rest,
-    },
-    document,
+    values: projectValues,
+    document: document ?? emptyDesignFor(projectValues),
   })
   for (const user of sharedWith) await insertShare(db, id, user.id)
   return id

@@ -4,12 +4,11 @@ import { actorOf, idParam } from '../../http/actor'
 import { requirePermission } from '../../http/auth'
 import type { RouteDeps } from '../../http/route-deps'
 import { validate } from '../../http/validate'
-import { designDocumentSchema } from './design-document'
 import { getDesign, saveDesign } from './designs.service'
 
 const params = z.object({ id: idParam })
 const saveBody = z.object({
-  design: designDocumentSchema,
+  design: z.unknown().refine((value) => value !== undefined, 'Send the design'),
   baseRevision: z.number({ error: 'Send the revision your change is based on' }).int().min(0),
 })
 

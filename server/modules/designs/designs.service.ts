@@ -1,6 +1,7 @@
 import type { Db } from '../../db/client'
 import type { Actor } from '../../http/actor'
-import { conflict, notFound } from '../../http/errors'
+import { conflict, invalidRequest, notFound } from '../../http/errors'
+import { validateDesign } from './design-document'
 import { getProject } from '../projects/projects.service'
 import { findDesign, saveDesignIfCurrent } from './designs.repository'
 
@@ -17,7 +18,12 @@ export async function saveDesign(
   input: { projectId: string; baseRevision: number; document: unknown },
 ) {
   await getProject(db, actor, input.projectId)
-  const saved = await saveDesignIfCurrent(db, { ...input, userId: actor.userId })
+  const checked = validateDesign(input.document)
+  if (!checked.ok) {
+    const message = checked.fields.length === 1 ? checked.fields[0].message : 'The design has errors'
+    throw invalidRequest(message, checked.fields)
+  }
+  const saved = await saveDesignIfCurrent(db, { ...input, document: checked.design, userId: actor.userId })
   if (saved) return { revision: saved.revision, updatedAt: saved.updatedAt.toISOString() }
   const current = await findDesign(db, input.projectId)
   if (!current) throw notFound('Design')

@@ -10,7 +10,7 @@ import type { z } from 'zod'
 import type { DbOrTx, Db } from '../../db/client'
 import type { Actor } from '../../http/actor'
 import { invalidRequest, notFound } from '../../http/errors'
-import { emptyDesignDocument } from '../designs/design-document'
+import { emptyDesignFor } from '../designs/design-document'
 import {
   deleteProject,
   findDesignDocument,
@@ -60,7 +60,7 @@ export async function createProject(db: Db, actor: Actor, input: z.output<typeof
       organizationId: actor.organizationId,
       createdBy: actor.userId,
       values: input,
-      document: emptyDesignDocument(),
+      document: emptyDesignFor(input),
     }),
   )
   return getProject(db, actor, id)
@@ -87,19 +87,15 @@ export function copyName(name: string): string {
 export async function duplicateProject(db: Db, actor: Actor, projectId: string) {
   const source = await getProject(db, actor, projectId)
   const id = await db.transaction(async (tx) => {
-    const document = (await findDesignDocument(tx, projectId)) ?? emptyDesignDocument()
-    return insertProjectWithDesign(tx, {
-      organizationId: actor.organizationId,
-      createdBy: actor.userId,
-      values: {
-        name: copyName(source.name),
-        clientName: source.clientName,
-        installationKind: source.installationKind,
-        nominalVoltageV: source.nominalVoltageV,
-        notes: source.notes,
-      },
-      document,
-    })
+    const values = {
+      name: copyName(source.name),
+      clientName: source.clientName,
+      installationKind: source.installationKind,
+      nominalVoltageV: source.nominalVoltageV,
+      notes: source.notes,
+    }
+    const document = (await findDesignDocument(tx, projectId)) ?? emptyDesignFor(values)
+    return insertProjectWithDesign(tx, { organizationId: actor.organizationId, createdBy: actor.userId, values, document })
   })
   return getProject(db, actor, id)
 }
