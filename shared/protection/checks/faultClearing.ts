@@ -1,0 +1,103 @@
+import { makeFinding } from '../../analysis/findings'
+import type { Finding } from '../../analysis/types'
+import { deviceBand } from '../timeCurrent'
+import { ICEA_SOURCE, shortCircuitLimit, withstandTimeS } from '../withstand'
+import { amps, seconds } from './_lib/format'
+import { partIdOf, positive, upstreamChain } from './_lib/chain'
+import type { ProtectionDevice, ProtectionRule, ResolvedContext } from './types'
+
+const FAULT_RULE = 'fault-not-cleared-before-damage'
+const THERMAL_RULE = 'thermal-breaker-sole-protection'
+const SOURCE = `Device maximum clearing time (its time-current band) against the conductor's short-circuit withstand, ${ICEA_SOURCE}`
+const THERMAL_SOURCE =
+  'Common practice: a thermal (bimetal) breaker does not open faster than about 0.2 s, so it cannot be the only ' +
+  `protection where the conductor must be cleared sooner; withstand by ${ICEA_SOURCE}`
+
+interface Case {
+  where: 'far end' | 'device terminals'
+  currentA: number
+  withstandS: number
+  clearS: number
+}
+
+/** Each fault position the analysis gave: far end (smallest current) and device terminals (largest). */
+function faultCases(device: ProtectionDevice): Case[] {
+  const conductor = device.conductor
+  if (!conductor) return []
+  const limit = shortCircuitLimit({ insulationRatingC: conductor.insulationRatingC, insulation: conductor.insulation })
+  const initialC = conductor.operatingC ?? conductor.insulationRatingC
+  const band = deviceBand(device.familyId, device.ratingA)
+  const cases: Case[] = []
+  const positions = [
+    ['far end', positive(device.faultCurrentFarEndA)],
+    ['device terminals', positive(device.faultCurrentAtDeviceA)],
+  ] as const
+  for (const [where, currentA] of positions) {
+    if (currentA === undefined) continue
+    // A conductor rated at or above its short-circuit limit has no margin at all: withstand 0 s.
+    const withstandS =
+      initialC >= limit.finalC ? 0 : withstandTimeS({ ...conductor, currentA, initialC, finalC: limit.finalC })
+    cases.push({ where, currentA, withstandS, clearS: band.maxClearS(currentA) })
+  }
+  return cases
+}
+
+/** The first upstream device sure to clear `currentA` within `withinS`, if any (backup protection). */
+function backupFor(device: ProtectionDevice, context: ResolvedContext, currentA: number, withinS: number) {
+  return upstreamChain(device, context.byId).find((up) => deviceBand(up.familyId, up.ratingA).maxClearS(currentA) < withinS)
+}
+
+function run(device: ProtectionDevice, context: ResolvedContext): Finding[] {
+  const conductor = device.conductor
+  if (!conductor) return []
+  const band = deviceBand(device.familyId, device.ratingA)
+  // Worst case: the smallest clearing margin (withstand ÷ clearing time) among the fault positions.
+  const failing = faultCases(device)
+    .filter((c) => !(c.clearS < c.withstandS) && !backupFor(device, context, c.currentA, c.withstandS))
+    .sort((a, b) => a.withstandS / a.clearS - b.withstandS / b.clearS)[0]
+  if (!failing) return []
+  const limit = shortCircuitLimit({ insulationRatingC: conductor.insulationRatingC, insulation: conductor.insulation })
+  const floorS = band.floor?.timeS
+  const thermal = band.kind === 'thermal-breaker' && floorS !== undefined && failing.withstandS < floorS
+  const base = {
+    severity: 'error' as const,
+    partIds: [partIdOf(device)],
+    conductorIds: [conductor.id],
+    // "Never opens" has no finite number to show; the message says it in words.
+    ...(Number.isFinite(failing.clearS) ? { measured: { value: failing.clearS, unit: 's' } } : {}),
+    limit: { value: failing.withstandS, unit: 's' },
+    scenarioId: context.scenarioId,
+  }
+  const faultText =
+    `A fault at the ${failing.where} of ${conductor.id} draws ${amps(failing.currentA)}; the conductor reaches ` +
+    `${limit.finalC} °C (${limit.insulation} insulation) after ${seconds(failing.withstandS)}`
+  if (thermal) {
+    return [
+      makeFinding({
+        ...base,
+        ruleId: THERMAL_RULE,
+        title: 'Thermal breaker is the only protection for a fault it cannot clear in time',
+        message: `${faultText}, faster than the breaker can ever open (about ${seconds(floorS)}), and no device upstream clears it sooner.`,
+        source: THERMAL_SOURCE,
+        suggestion: { text: 'Add a fuse (or a breaker with a magnetic trip) that clears this fault in time, upstream or in place of the breaker; or use a larger conductor.' },
+      }),
+    ]
+  }
+  return [
+    makeFinding({
+      ...base,
+      ruleId: FAULT_RULE,
+      title: 'Fault not cleared before the conductor is damaged',
+      message: `${faultText}; the device may take ${seconds(failing.clearS)} to clear it, and no device upstream clears it sooner.`,
+      source: `${SOURCE}; band: ${band.source}; limit: ${limit.source}`,
+      suggestion: { text: 'Use a faster device or a lower rating, or a larger conductor (longer withstand, and more fault current to open the device).' },
+    }),
+  ]
+}
+
+export const faultClearingRule: ProtectionRule = {
+  ruleId: FAULT_RULE,
+  requirement: "The protecting device (or one upstream) must clear the conductor's fault before the insulation's short-circuit limit",
+  source: SOURCE,
+  run,
+}

@@ -1,0 +1,100 @@
+import { makeFinding } from '../../analysis/findings'
+import type { Finding } from '../../analysis/types'
+import { DEVICE_FAMILY_IDS, standardRatingsA, type DeviceFamilyId } from '../ratings'
+import { deviceBand, getTimeCurrentFamily, hasTimeCurrentModel } from '../timeCurrent'
+import { amps, seconds } from './_lib/format'
+import { partIdOf } from './_lib/chain'
+import type { LoadStart, ProtectionDevice, ProtectionRule } from './types'
+
+const RULE_ID = 'motor-start-nuisance-open'
+const SOURCE =
+  "Device minimum melting / opening time (the family's time-current band) against the load's start pulse; " +
+  'motor inrush ~5–10 × running current for up to ~1 s (common practice)'
+
+// Time-delay versions of the same physical size are tried first, so the holder can stay.
+const SAME_SIZE_TIME_DELAY: Record<string, string> = {
+  'cartridge-5x20-fast': 'cartridge-5x20-delay',
+  'cartridge-6x32-fast': 'cartridge-6x32-delay',
+}
+
+function ratingsOf(familyId: string): readonly number[] {
+  return (DEVICE_FAMILY_IDS as readonly string[]).includes(familyId) ? standardRatingsA(familyId as DeviceFamilyId) : []
+}
+
+function ridesThrough(familyId: string, ratingA: number, currentA: number, durationS: number): boolean {
+  return deviceBand(familyId, ratingA).minMeltS(currentA) > durationS
+}
+
+/** A time-delay family stocked at this rating that carries the pulse, same size first. */
+function timeDelayAlternative(device: ProtectionDevice, currentA: number, durationS: number): string | null {
+  const preferred = SAME_SIZE_TIME_DELAY[device.familyId]
+  const candidates = [preferred, ...DEVICE_FAMILY_IDS].filter((id): id is string => !!id && id !== device.familyId)
+  for (const familyId of candidates) {
+    if (!hasTimeCurrentModel(familyId)) continue
+    const band = deviceBand(familyId, device.ratingA)
+    // Thermal breakers ride through starts but cannot clear fast faults (see faultClearing.ts).
+    if (!band.timeDelay || band.kind === 'thermal-breaker') continue
+    if (!ratingsOf(familyId).includes(device.ratingA)) continue
+    if (ridesThrough(familyId, device.ratingA, currentA, durationS)) return familyId
+  }
+  return null
+}
+
+/** The smallest higher rating of the same family, within what the conductor allows, that carries the pulse. */
+function nextRatingThatRides(device: ProtectionDevice, currentA: number, durationS: number): number | null {
+  const limitA = device.conductor?.maxDeviceRatingA
+  if (limitA === undefined) return null
+  for (const r of ratingsOf(device.familyId)) {
+    if (r <= device.ratingA || r > limitA + 1e-9) continue
+    if (ridesThrough(device.familyId, r, currentA, durationS)) return r
+  }
+  return null
+}
+
+function checkStart(device: ProtectionDevice, start: LoadStart, scenarioId: string | undefined): Finding | null {
+  if (!(start.runningCurrentA > 0) || !(start.inrushMultiple > 0) || !(start.startDurationS > 0)) return null
+  const band = deviceBand(device.familyId, device.ratingA)
+  const startA = (device.baseCurrentA ?? 0) + start.inrushMultiple * start.runningCurrentA
+  const minOpenS = band.minMeltS(startA)
+  if (minOpenS > start.startDurationS) return null
+  const surelyOpens = band.maxClearS(startA) <= start.startDurationS
+  const alternative = timeDelayAlternative(device, startA, start.startDurationS)
+  const nextRating = nextRatingThatRides(device, startA, start.startDurationS)
+  const ideas = [
+    alternative ? `use a time-delay device: ${getTimeCurrentFamily(alternative).label}, ${amps(device.ratingA)}` : null,
+    nextRating ? `use the next rating the conductor allows that rides through: ${amps(nextRating)}` : null,
+  ].filter(Boolean)
+  return makeFinding({
+    ruleId: RULE_ID,
+    severity: surelyOpens ? 'error' : 'warning',
+    title: surelyOpens ? 'Device opens on the start pulse' : 'Device may open on the start pulse',
+    message:
+      `Start of ${start.loadId}: ${amps(startA)} (${start.inrushMultiple} × ${amps(start.runningCurrentA)}` +
+      `${device.baseCurrentA ? ` + ${amps(device.baseCurrentA)} of other loads` : ''}) for ${seconds(start.startDurationS)}. ` +
+      `The device (${getTimeCurrentFamily(device.familyId).label}, ${amps(device.ratingA)}) may open after ${seconds(minOpenS)}` +
+      `${surelyOpens ? ` and is sure to open within ${seconds(band.maxClearS(startA))}` : ''}.`,
+    partIds: [partIdOf(device), start.loadId],
+    conductorIds: device.conductor ? [device.conductor.id] : [],
+    measured: { value: start.startDurationS, unit: 's' },
+    limit: { value: minOpenS, unit: 's' },
+    source: `${SOURCE}; band: ${band.source}`,
+    suggestion: ideas.length
+      ? { text: `${ideas.join('; or ')}.` }
+      : { text: 'Use a time-delay device or a soft-start; check the conductor allows a larger rating.' },
+    scenarioId,
+  })
+}
+
+export const motorStartRule: ProtectionRule = {
+  ruleId: RULE_ID,
+  requirement: 'The device must carry each load start (inrush × running current for its duration) without opening',
+  source: SOURCE,
+  run(device, context) {
+    const findings: Finding[] = []
+    for (const start of device.loadStarts ?? []) {
+      const f = checkStart(device, start, context.scenarioId)
+      if (f) findings.push(f)
+    }
+    return findings
+  },
+}
