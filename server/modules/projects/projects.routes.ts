@@ -24,6 +24,16 @@ import {
 
 export const projectParams = z.object({ id: idParam })
 
+/**
+ * projectUpdateSchema is projectInputSchema.partial(), and zod 4 still applies the input schema's
+ * defaults to absent keys (clientName, notes → ''): keep only the fields the client actually sent,
+ * so a PATCH of `{ archived: true }` does not wipe the notes.
+ */
+function onlySentFields<T extends object>(parsed: T, raw: unknown): Partial<T> {
+  const sent = raw && typeof raw === 'object' ? raw : {}
+  return Object.fromEntries(Object.entries(parsed).filter(([key]) => Object.hasOwn(sent, key))) as Partial<T>
+}
+
 export function projectsRoutes(deps: RouteDeps): Router {
   const { db } = deps
   const router = Router()
@@ -47,7 +57,7 @@ export function projectsRoutes(deps: RouteDeps): Router {
   const patchInput = validate({ params: projectParams, body: projectUpdateSchema })
   router.patch('/:id', requirePermission('project.write'), patchInput, async (req, res) => {
     const { params, body } = patchInput.data(req)
-    res.json(await editProject(db, actorOf(req), params.id, body))
+    res.json(await editProject(db, actorOf(req), params.id, onlySentFields(body, req.body)))
   })
 
   router.post('/:id/duplicate', requirePermission('project.write'), byId, async (req, res) => {
