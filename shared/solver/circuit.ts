@@ -56,9 +56,15 @@ export interface Circuit {
 export type SolverProblem =
   /** Island with no voltage source: not solved, its voltages and currents are reported as 0. */
   | { kind: 'floating'; nodes: number[]; elementIds: string[] }
-  /** A source whose terminals are joined by (almost) 0 Ω. */
+  /**
+   * A source whose terminals are joined by (almost) 0 Ω: through resistors below the short
+   * threshold, or so hard that its terminal voltage fell below 10 % of its EMF while discharging.
+   */
   | { kind: 'shorted-source'; elementIds: string[] }
-  /** Sources in a loop that fight: one drives another backwards beyond the set limit. */
+  /**
+   * Sources in a loop that fight: in an island with several sources one discharges while another
+   * is driven backwards by more than 10 % of the largest EMF (I·R) or by more than a set current.
+   */
   | { kind: 'source-loop'; elementIds: string[] }
   /**
    * Newton did not reach the tolerances, or a constant-power element ended below its minimum

@@ -3,7 +3,7 @@ import { buildElementTable, CPOWER, ISOURCE, VSOURCE, reportedCurrent } from './
 import { solveNodal } from './_lib/newton'
 import { buildNodalSystem } from './_lib/nodalSystem'
 import { circuitShapeError, prepareNetwork } from './_lib/prepareNetwork'
-import { findShortedSources, findSourceLoops } from './_lib/sourceChecks'
+import { findCollapsedSources, findShortedSources, findSourceLoops } from './_lib/sourceChecks'
 
 export type { Circuit, CircuitElement, Island, OperatingPoint, SolverProblem } from './circuit'
 
@@ -16,6 +16,8 @@ export interface OperatingPointOptions {
   toleranceA?: number
   /** Resistors below this count as a short across a source (default 1e-6 Ω). */
   shortResistanceOhm?: number
+  /** A discharging source whose terminal voltage is below this share of its EMF is shorted (default 0.1). */
+  shortedTerminalFraction?: number
   /** Sources in one island fight when one is driven back by I·R above this share of the largest EMF (default 0.1). */
   sourceLoopFraction?: number
   /** ... or by more than this current (default: no limit). */
@@ -51,7 +53,6 @@ export function solveOperatingPoint(circuit: Circuit, options: OperatingPointOpt
   const prepared = prepareNetwork(circuit, () => true)
   const { active, islandMap, isUnknown } = prepared
   const problems: SolverProblem[] = prepared.problems
-  problems.push(...findShortedSources(elements, prepared.valid, nodeCount, options.shortResistanceOhm ?? 1e-6))
 
   const table = buildElementTable(elements, active)
   const stamps = new Uint8Array(elements.length)
@@ -106,6 +107,11 @@ export function solveOperatingPoint(circuit: Circuit, options: OperatingPointOpt
       problems.push({ kind: 'not-converged', elementIds: starved, residualA: Number.isFinite(missingA) ? missingA : Number.MAX_VALUE })
     }
   }
+  const shorted = new Set(findShortedSources(elements, prepared.valid, nodeCount, options.shortResistanceOhm ?? 1e-6))
+  for (const id of findCollapsedSources(elements, active, nodeVoltageV, elementCurrentA, options.shortedTerminalFraction ?? 0.1)) {
+    shorted.add(id)
+  }
+  if (shorted.size) problems.push({ kind: 'shorted-source', elementIds: [...shorted] })
   problems.push(
     ...findSourceLoops(elements, active, islandMap.islandOfNode, elementCurrentA, {
       sourceLoopFraction: options.sourceLoopFraction ?? 0.1,

@@ -6,6 +6,8 @@ import { terminalsOf, validateElements } from './validateElements'
 export interface PreparedNetwork {
   /** 1 for elements that passed validation. */
   valid: Uint8Array
+  /** 1 for valid, included elements that can carry current (a current source between islands cannot). */
+  used: Uint8Array
   /** 1 for elements that take part: valid, included and inside an island with a voltage source. */
   active: Uint8Array
   islandMap: IslandMap
@@ -79,5 +81,5 @@ export function prepareNetwork(circuit: Circuit, include: (element: CircuitEleme
     if (!island.hasSource) continue
     for (const node of island.nodes) if (node !== island.referenceNode) isUnknown[node] = 1
   }
-  return { valid, active, islandMap, isUnknown, problems }
+  return { valid, used, active, islandMap, isUnknown, problems }
 }

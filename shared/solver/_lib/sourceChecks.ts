@@ -15,7 +15,7 @@ export function findShortedSources(
   valid: Uint8Array,
   nodeCount: number,
   shortResistanceOhm: number,
-): SolverProblem[] {
+): string[] {
   const uf = new UnionFind(nodeCount)
   for (let e = 0; e < elements.length; e++) {
     const element = elements[e]
@@ -26,7 +26,30 @@ export function findShortedSources(
     const element = elements[e]
     if (valid[e] && element.kind === 'vsource' && uf.find(element.pos) === uf.find(element.neg)) elementIds.push(element.id)
   }
-  return elementIds.length ? [{ kind: 'shorted-source', elementIds }] : []
+  return elementIds
+}
+
+/**
+ * Sources whose terminal voltage collapsed below `fraction` of their EMF while discharging: the
+ * circuit outside joins their terminals by less than Rint·f/(1 − f), a short in any real design
+ * (a battery reversed into a bank shows up here too: each is the other's short).
+ */
+export function findCollapsedSources(
+  elements: CircuitElement[],
+  active: Uint8Array,
+  nodeVoltageV: Float64Array,
+  currentA: Float64Array,
+  fraction: number,
+): string[] {
+  const ids: string[] = []
+  for (let e = 0; e < elements.length; e++) {
+    const element = elements[e]
+    if (!active[e] || element.kind !== 'vsource' || element.voltageV === 0) continue
+    const terminalV = nodeVoltageV[element.pos] - nodeVoltageV[element.neg]
+    const discharging = currentA[e] * element.voltageV > 0
+    if (discharging && Math.abs(terminalV) < fraction * Math.abs(element.voltageV)) ids.push(element.id)
+  }
+  return ids
 }
 
 /**
