@@ -1,4 +1,5 @@
-import { PART_CATALOGUE, type ParamsOf } from './catalogue'
+import { makeConductor, makePart, type ConductorOptions } from './builder'
+import type { ParamsOf } from './catalogue'
 import { newId } from './ids'
 import type { Conductor, Design, DesignSettings, Part, PartType, Scenario } from './schema'
 import { DESIGN_FORMAT_ID, DESIGN_FORMAT_VERSION } from './version'
@@ -34,18 +35,12 @@ export function createEmptyDesign(options: EmptyDesignOptions): Design {
 
 const DEMO_SETTINGS: DesignSettings = { nominalVoltageV: 24, unitSystem: 'metric', profile: 'vehicle', defaultAmbientC: 30 }
 
-function part<T extends PartType>(type: T, id: string, label: string, x: number, y: number, params: Partial<ParamsOf<T>> = {}): Part {
-  return { id, type, label, position: { x, y }, params: { ...PART_CATALOGUE[type].defaultParams(DEMO_SETTINGS), ...params } } as unknown as Part
-}
-
-type WireOptions = Partial<Pick<Conductor, 'installation' | 'bundledCount' | 'ambientC' | 'sheathed' | 'insulationRatingC'>>
-/** A conductor from "partId.terminal" to "partId.terminal"; colour from the polarity of its run. */
-function wire(id: string, label: string, from: string, to: string, sizeId: Conductor['sizeId'], lengthM: number,
-  colour: 'red' | 'black', options: WireOptions = {}): Conductor {
-  const ref = (text: string) => ({ partId: text.slice(0, text.indexOf('.')), terminal: text.slice(text.indexOf('.') + 1) })
-  return { id, label, from: ref(from), to: ref(to), sizeId, material: 'tinned-copper', lengthM, insulationRatingC: 105,
-    installation: 'free-air', bundledCount: 1, ambientC: null, sheathed: false, colour, ...options }
-}
+const part = <T extends PartType>(type: T, id: string, label: string, x: number, y: number, params: Partial<ParamsOf<T>> = {}) =>
+  makePart(DEMO_SETTINGS, type, id, label, { x, y }, params)
+/** Demo conductors are tinned marine/automotive cable rated 105 °C; red for positive, black for negative runs. */
+const wire = (id: string, label: string, from: string, to: string, sizeId: Conductor['sizeId'], lengthM: number,
+  colour: 'red' | 'black', options: ConductorOptions = {}) =>
+  makeConductor(id, label, from, to, sizeId, lengthM, { material: 'tinned-copper', colour, ...options })
 
 const on = (level = 1) => ({ on: true, level })
 

@@ -1,0 +1,84 @@
+import { makeConductor, makePart, type ConductorOptions } from '../../../shared/design/builder'
+import type { ParamsOf } from '../../../shared/design/catalogue'
+import type { Conductor, Design, DesignSettings, PartType } from '../../../shared/design/schema'
+
+// An invented 12 V camper van built to pass every check: short fat main runs, branch fuses at
+// 125–150 % of their loads and within the conductors' ampacity, two PV strings (no string fuses
+// needed, NEC 690.9), and critical loads within 3 % drop.
+
+const SETTINGS: DesignSettings = { nominalVoltageV: 12, unitSystem: 'metric', profile: 'vehicle', defaultAmbientC: 30 }
+const part = <T extends PartType>(type: T, id: string, label: string, x: number, y: number, params: Partial<ParamsOf<T>> = {}) =>
+  makePart(SETTINGS, type, id, label, { x, y }, params)
+const wire = (id: string, label: string, from: string, to: string, sizeId: Conductor['sizeId'], lengthM: number, options: ConductorOptions = {}) =>
+  makeConductor(id, label, from, to, sizeId, lengthM, { colour: label.includes('−') ? 'black' : 'red', ...options })
+const strip = (ratingA: number) => ({ family: 'strip-bolt-down' as const, ratingA, dcVoltageRatingV: 32, interruptingRatingA: 2000 })
+
+export function smallVan12V(): Design {
+  return {
+    format: 'ampwright.design', version: 1, id: 'small-van-12v', name: 'Small camper van, 12 V',
+    settings: SETTINGS,
+    parts: [
+      part('pv-array', 'roof-array', 'Roof array, 2 × 1 module', 60, 80, { moduleVocV: 24.6, moduleIscA: 11.6, moduleVmpV: 20.5,
+        moduleImpA: 10.7, vocTempCoeffPctPerC: -0.28, maxSeriesFuseA: 20, modulesPerString: 1, strings: 2, recordLowC: -15 }),
+      part('charge-controller', 'mppt', 'MPPT controller 100 V / 30 A', 320, 80, { maxPvVoltageV: 100, maxPvCurrentA: 30,
+        outputCurrentA: 30, efficiency: 0.97, mppt: true }),
+      part('battery', 'house-bank', 'House battery LFP 12.8 V 100 Ah', 500, 420, { chemistry: 'lfp', nominalVoltageV: 12.8,
+        capacityAh: 100, internalResistanceOhm: 0.006, seriesCount: 1, parallelCount: 1 }),
+      part('fuse', 'main-fuse', 'Main fuse Class T 150 A', 680, 280, { family: 'class-t', ratingA: 150, dcVoltageRatingV: 160,
+        interruptingRatingA: 20000 }),
+      part('battery-switch', 'main-switch', 'Battery switch', 820, 280, { ratingA: 300 }),
+      part('shunt', 'shunt', 'Shunt 500 A / 50 mV', 680, 560, { ratingA: 500, resistanceOhm: 0.0001 }),
+      part('bus-bar', 'pos-bus', 'Positive bus', 960, 280, { ratingA: 250, polarity: 'positive', studs: 4 }),
+      part('bus-bar', 'neg-bus', 'Negative bus', 960, 560, { ratingA: 250, polarity: 'negative', studs: 4 }),
+      part('fuse', 'solar-fuse', 'Solar charge fuse 40 A', 820, 120, strip(40)),
+      part('fuse', 'inverter-fuse', 'Inverter fuse 50 A', 1120, 120, strip(50)),
+      part('inverter', 'inverter', 'Inverter 300 W', 1300, 80, { continuousW: 300, surgeW: 600, efficiency: 0.88 }),
+      part('fuse', 'panel-fuse', 'Panel feed fuse 40 A', 1120, 320, strip(40)),
+      part('fuse-panel', 'panel', 'Fuse panel', 1240, 420, { ratingA: 100, ways: 5, wayRatingsA: [10, 5, 10, 5, 5],
+        family: 'blade-regular', dcVoltageRatingV: 32, interruptingRatingA: 1000 }),
+      part('load', 'fridge', 'Compressor fridge', 1480, 260, { model: 'power', powerW: 45, duty: 'continuous', critical: false, hoursPerDay: 10 }),
+      part('load', 'lights', 'Cabin lights', 1480, 380, { model: 'power', powerW: 24, duty: 'continuous', critical: false, hoursPerDay: 5 }),
+      part('load', 'water-pump', 'Water pump', 1480, 500, { model: 'current', currentA: 6, duty: 'intermittent', critical: false,
+        hoursPerDay: 0.3, start: { inrushMultiple: 3, durationS: 0.1 } }),
+      part('load', 'fan', 'Roof vent fan', 1480, 620, { model: 'current', currentA: 2.5, duty: 'continuous', critical: false, hoursPerDay: 6 }),
+      part('load', 'usb', 'USB & chargers', 1480, 740, { model: 'power', powerW: 20, duty: 'continuous', critical: false, hoursPerDay: 4 }),
+    ],
+    conductors: [
+      wire('pv-pos', 'Array + to controller', 'roof-array.pos', 'mppt.pv-pos', 'awg-8', 4, { sheathed: true }),
+      wire('pv-neg', 'Array − to controller', 'roof-array.neg', 'mppt.pv-neg', 'awg-8', 4, { sheathed: true }),
+      wire('solar-feed', 'Bus to solar fuse', 'pos-bus.c', 'solar-fuse.line', 'awg-8', 0.2),
+      wire('mppt-out-pos', 'Controller + from solar fuse', 'solar-fuse.load', 'mppt.bat-pos', 'awg-8', 1),
+      wire('mppt-out-neg', 'Controller − to bus', 'mppt.bat-neg', 'neg-bus.c', 'awg-8', 1.2),
+      wire('bank-pos', 'Battery + to main fuse', 'house-bank.pos', 'main-fuse.line', 'awg-1/0', 0.2, { sheathed: true }),
+      wire('fuse-switch', 'Main fuse to switch', 'main-fuse.load', 'main-switch.a', 'awg-1/0', 0.3, { sheathed: true }),
+      wire('switch-bus', 'Switch to positive bus', 'main-switch.b', 'pos-bus.a', 'awg-1/0', 0.3, { sheathed: true }),
+      wire('bank-neg', 'Battery − to shunt', 'house-bank.neg', 'shunt.battery', 'awg-1/0', 0.3),
+      wire('shunt-bus', 'Shunt − to negative bus', 'shunt.system', 'neg-bus.a', 'awg-1/0', 0.3),
+      wire('inverter-feed', 'Bus to inverter fuse', 'pos-bus.b', 'inverter-fuse.line', 'awg-6', 0.2),
+      wire('inverter-pos', 'Inverter +', 'inverter-fuse.load', 'inverter.pos', 'awg-6', 1),
+      wire('inverter-neg', 'Inverter −', 'inverter.neg', 'neg-bus.b', 'awg-6', 1.2),
+      wire('panel-feed', 'Bus to panel fuse', 'pos-bus.d', 'panel-fuse.line', 'awg-8', 0.2),
+      wire('panel-pos', 'Panel feed +', 'panel-fuse.load', 'panel.in-pos', 'awg-8', 1.5),
+      wire('panel-neg', 'Panel feed −', 'panel.in-neg', 'neg-bus.d', 'awg-8', 1.5),
+      wire('fridge-pos', 'Fridge +', 'panel.out1', 'fridge.pos', 'awg-12', 3),
+      wire('fridge-neg', 'Fridge −', 'fridge.neg', 'panel.neg', 'awg-12', 3),
+      wire('lights-pos', 'Lights +', 'panel.out2', 'lights.pos', 'awg-16', 3),
+      wire('lights-neg', 'Lights −', 'lights.neg', 'panel.neg', 'awg-16', 3),
+      wire('pump-pos', 'Pump +', 'panel.out3', 'water-pump.pos', 'awg-14', 2),
+      wire('pump-neg', 'Pump −', 'water-pump.neg', 'panel.neg', 'awg-14', 2),
+      wire('fan-pos', 'Fan +', 'panel.out4', 'fan.pos', 'awg-16', 2),
+      wire('fan-neg', 'Fan −', 'fan.neg', 'panel.neg', 'awg-16', 2),
+      wire('usb-pos', 'USB +', 'panel.out5', 'usb.pos', 'awg-16', 1),
+      wire('usb-neg', 'USB −', 'usb.neg', 'panel.neg', 'awg-16', 1),
+    ],
+    scenarios: [
+      { id: 'evening', name: 'Evening, all loads', sunOn: false, chargerOn: false,
+        loads: { fridge: { on: true, level: 1 }, lights: { on: true, level: 1 }, 'water-pump': { on: true, level: 1 },
+          fan: { on: true, level: 1 }, usb: { on: true, level: 1 }, inverter: { on: true, level: 1 } } },
+      { id: 'noon', name: 'Noon, charging', sunOn: true, chargerOn: false,
+        loads: { fridge: { on: true, level: 1 }, fan: { on: true, level: 1 } } },
+      { id: 'pump-start', name: 'Pump start', sunOn: false, chargerOn: false, motorStart: true,
+        loads: { fridge: { on: true, level: 1 }, 'water-pump': { on: true, level: 1 } } },
+    ],
+  }
+}
