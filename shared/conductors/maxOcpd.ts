@@ -50,6 +50,7 @@ export function maxOcpdA(input: MaxOcpdInput): MaxOcpdResult {
   getConductorSize(input.sizeId)
   const ampacityA = input.ampacityA
   const rules: string[] = []
+  if (ampacityA === 0) return { maxRatingA: null, limitA: 0, rules: ['a conductor with no allowable current may have no device sized to it'] }
   const atMost = nearestStandardRatingAtMost(ampacityA, input.family)
   const above = nextRatingAboveA(ampacityA, input.family)
   const matches = atMost !== null && Math.abs(atMost - ampacityA) < 1e-9
