@@ -13,7 +13,7 @@ const SUFFIX_LENGTH = 8
  * @example newId('bat') // 'bat-0f3kz91q'
  */
 export function newId(prefix: string, random: () => number = Math.random): string {
-  const cleanPrefix = prefix.replace(/[^A-Za-z0-9_-]/g, '').slice(0, 40) || 'id'
+  const cleanPrefix = prefix.replace(/[^A-Za-z0-9_-]/g, '').replace(/^[_-]+/, '').slice(0, 40) || 'id'
   let suffix = ''
   for (let i = 0; i < SUFFIX_LENGTH; i++) {
     suffix += ALPHABET[Math.floor(random() * ALPHABET.length) % ALPHABET.length]
