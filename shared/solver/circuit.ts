@@ -71,7 +71,13 @@ export type SolverProblem =
    * voltage (its demand cannot be supplied: the result is its resistive fallback). `residualA` is
    * the worst KCL residual, or the current the starved loads miss compared with P/V.
    */
-  | { kind: 'not-converged'; elementIds: string[]; residualA: number }
+  | {
+      kind: 'not-converged'
+      elementIds: string[]
+      residualA: number
+      /** 'iterations': Newton stopped short; 'below-minimum-voltage': solved, but loads are starved. */
+      cause?: 'iterations' | 'below-minimum-voltage'
+    }
   /** Non-finite or non-positive resistance, bad node number, ...: the element is left out (open). */
   | { kind: 'invalid-element'; elementIds: string[]; message: string }
 

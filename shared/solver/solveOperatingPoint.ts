@@ -88,6 +88,7 @@ export function solveOperatingPoint(circuit: Circuit, options: OperatingPointOpt
       kind: 'not-converged',
       elementIds: (loads.length ? loads : near).map((el) => el.id),
       residualA: outcome.residualA,
+      cause: 'iterations',
     })
   } else {
     // A constant-power element below its minimum voltage is on its resistive fallback: its demand is not met.
@@ -104,7 +105,9 @@ export function solveOperatingPoint(circuit: Circuit, options: OperatingPointOpt
     }
     if (starved.length) {
       status = 'not-converged'
-      problems.push({ kind: 'not-converged', elementIds: starved, residualA: Number.isFinite(missingA) ? missingA : Number.MAX_VALUE })
+      problems.push({ kind: 'not-converged', elementIds: starved, residualA: Number.isFinite(missingA) ? missingA : Number.MAX_VALUE,
+        cause: 'below-minimum-voltage',
+      })
     }
   }
   const shorted = new Set(findShortedSources(elements, prepared.valid, nodeCount, options.shortResistanceOhm ?? 1e-6))

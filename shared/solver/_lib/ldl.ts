@@ -60,6 +60,9 @@ export function createFactor(symbolic: LdlSymbolic): LdlFactor {
 /**
  * Numeric factorisation A = L D Lᵀ. Returns -1 on success, else the column whose pivot is not
  * safely positive (D[k] ≤ relPivot · |diagScale[k]|) — the caller then changes the linearisation.
+ * With `perturb`, such a pivot is replaced by its diagonal scale instead (static pivoting): for a
+ * matrix known to be positive semi-definite this only happens on a part of the network that no
+ * conductance ties to its reference, whose voltage is then set to 0 rather than left undefined.
  */
 export function ldlNumeric(
   factor: LdlFactor,
@@ -67,6 +70,7 @@ export function ldlNumeric(
   ai: Int32Array,
   ax: Float64Array,
   diagScale: Float64Array,
+  perturb = false,
   relPivot = 1e-13,
 ): number {
   const { symbolic, li, lx, d, y, pattern, flag, lnz } = factor
@@ -101,8 +105,11 @@ export function ldlNumeric(
       lx[p] = lki
       lnz[i]++
     }
+    if (!(dk > relPivot * diagScale[k])) {
+      if (!perturb || !Number.isFinite(dk)) return k
+      dk = diagScale[k] > 0 ? diagScale[k] : 1
+    }
     d[k] = dk
-    if (!(dk > relPivot * diagScale[k])) return k
   }
   return -1
 }

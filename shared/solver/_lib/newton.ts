@@ -28,6 +28,12 @@ const RELATIVE_RESIDUAL = 1e-10
 /** A Newton step may change a load's voltage by at most this fraction of max(|V|, Vmin). */
 const STEP_LIMIT = 0.5
 const LINE_SEARCH_HALVINGS = 8
+/**
+ * Conductance from every unknown node to its island's reference, as SPICE's GMIN (1e-12 S):
+ * it keeps a node reached only through a load of 0 W, or only through loads at no-load, from
+ * making the matrix singular. It leaks 1e-11 A at 10 V, far below any tolerance used here.
+ */
+const GMIN_S = 1e-12
 
 const enum Linearisation {
   NoLoad,
@@ -48,6 +54,10 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
     sys.ax.fill(0)
     sys.diagAbs.fill(0)
     rhs.fill(0)
+    for (let k = 0; k < n; k++) {
+      sys.ax[sys.ap[k]] += GMIN_S // the diagonal is the first slot of every column
+      sys.diagAbs[k] += GMIN_S
+    }
     for (let e = 0; e < t.m; e++) {
       if (!t.active[e]) continue
       let g = 0
@@ -81,7 +91,9 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
     }
   }
 
-  const factor = (): boolean => ldlNumeric(sys.factor, sys.ap, sys.ai, sys.ax, sys.diagAbs) < 0
+  // Only the Newton Jacobian may be indefinite; the no-load and secant matrices are conductance matrices.
+  const factor = (mode: Linearisation): boolean =>
+    ldlNumeric(sys.factor, sys.ap, sys.ai, sys.ax, sys.diagAbs, mode !== Linearisation.Newton) < 0
 
   const solveInto = (b: Float64Array): boolean => {
     ldlSolve(sys.factor, b)
@@ -127,7 +139,7 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
   // Start from the no-load voltages: the high-voltage branch a supplied constant-power load sits on.
   assemble(Linearisation.NoLoad)
   x.set(rhs)
-  if (!factor() || !solveInto(x)) {
+  if (!factor(Linearisation.NoLoad) || !solveInto(x)) {
     nodeV.fill(0)
     return { converged: false, iterations: 1, residualA: computeResidual(nodeV), badNodes: overTolerance(), factored: false }
   }
@@ -151,9 +163,9 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
   let iteration = 1
   for (; iteration <= options.maxIterations; iteration++) {
     assemble(Linearisation.Newton)
-    if (!factor()) {
+    if (!factor(Linearisation.Newton)) {
       assemble(Linearisation.Secant)
-      if (!factor()) break
+      if (!factor(Linearisation.Secant)) break
     }
     x.set(rhs)
     if (!solveInto(x)) break
