@@ -79,10 +79,14 @@ function checkStart(device: ProtectionDevice, start: LoadStart, scenarioId: stri
     limit: { value: minOpenS, unit: 's' },
     source: `${SOURCE}; band: ${band.source}`,
     suggestion: ideas.length
-      ? { text: `${ideas.join('; or ')}.` }
+      ? { text: capitalise(`${ideas.join('; or ')}.`) }
       : { text: 'Use a time-delay device or a soft-start; check the conductor allows a larger rating.' },
     scenarioId,
   })
+}
+
+function capitalise(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1)
 }
 
 export const motorStartRule: ProtectionRule = {

@@ -15,10 +15,12 @@ export function logLogTimeS(points: readonly CurvePoint[], multiple: number): nu
   if (!(multiple > 0) || points.length === 0) return Infinity
   const first = points[0]
   if (multiple < first.multiple) return Infinity
+  if (multiple === first.multiple) return first.timeS
   for (let i = 1; i < points.length; i++) {
     const a = points[i - 1]
     const b = points[i]
-    if (multiple <= b.multiple) {
+    if (multiple === b.multiple) return b.timeS // exact at the anchors, no rounding
+    if (multiple < b.multiple) {
       const fraction = Math.log(multiple / a.multiple) / Math.log(b.multiple / a.multiple)
       return Math.exp(Math.log(a.timeS) + fraction * Math.log(b.timeS / a.timeS))
     }
