@@ -1,5 +1,6 @@
 import { pathToFileURL } from 'node:url'
 import type { Design, Scenario } from '../../shared/design/schema'
+import { analyzeDesign } from '../../shared/analysis/analyzeDesign'
 import type { AnalysisResult } from '../../shared/analysis/types'
 import { ANALYZE_USAGE, parseAnalyzeArgs } from './args'
 import { readDesignFile } from './readDesignFile'
@@ -15,20 +16,6 @@ export const EXIT_INVALID = 2
 export interface CliIo {
   out: (text: string) => void
   err: (text: string) => void
-}
-
-type Analyze = (design: Design, options?: { scenarioIds?: string[] }) => AnalysisResult
-
-// The analysis module is written alongside this CLI; it is loaded on demand so that argument,
-// file and validation errors are reported even where it is not present yet.
-const ANALYSIS_MODULE = '../../shared/analysis/analyzeDesign.ts'
-async function loadAnalyze(): Promise<Analyze | null> {
-  try {
-    const mod = (await import(ANALYSIS_MODULE)) as { analyzeDesign?: Analyze }
-    return typeof mod.analyzeDesign === 'function' ? mod.analyzeDesign : null
-  } catch {
-    return null
-  }
 }
 
 /** A scenario by id, else by name (ignoring case and surrounding spaces). */
@@ -69,14 +56,9 @@ export async function runAnalyzeCli(argv: readonly string[], io: CliIo): Promise
     scenarioIds = [scenario.id]
   }
 
-  const analyze = await loadAnalyze()
-  if (!analyze) {
-    io.err(`${file} is a valid design, but the analysis engine is not available in this build.`)
-    return EXIT_INVALID
-  }
   let result: AnalysisResult
   try {
-    result = analyze(design, scenarioIds ? { scenarioIds } : undefined)
+    result = analyzeDesign(design, scenarioIds ? { scenarioIds } : undefined)
   } catch (error) {
     io.err(`The analysis stopped unexpectedly on ${file}: ${(error as Error).message ?? String(error)}`)
     return EXIT_INVALID

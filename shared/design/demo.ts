@@ -42,6 +42,9 @@ const wire = (id: string, label: string, from: string, to: string, sizeId: Condu
   colour: 'red' | 'black', options: ConductorOptions = {}) =>
   makeConductor(id, label, from, to, sizeId, lengthM, { material: 'tinned-copper', colour, ...options })
 
+/** Bolt-down strip fuses: ~6 kA at 32 V DC, the figure in shared/protection/families.ts (recalled, unverified). */
+const STRIP_FUSE_AIC_A = 6000
+
 const on = (level = 1) => ({ on: true, level })
 
 /**
@@ -66,7 +69,7 @@ export function createDemoDesign(): Design {
     part('battery', 'starter-batteries', 'Starter batteries 2 × 12 V', 60, 640, { chemistry: 'agm', nominalVoltageV: 12,
       capacityAh: 140, internalResistanceOhm: 0.005, seriesCount: 2, parallelCount: 1 }),
     part('fuse', 'dcdc-in-fuse', 'DC-DC feed fuse 50 A', 220, 640, { family: 'strip-bolt-down', ratingA: 50,
-      dcVoltageRatingV: 32, interruptingRatingA: 2000 }),
+      dcVoltageRatingV: 32, interruptingRatingA: STRIP_FUSE_AIC_A }),
     part('dc-dc-charger', 'dcdc', 'DC-DC charger 24/24 V 30 A', 400, 640, { outputCurrentA: 30, efficiency: 0.92, inputMinV: 26 }),
     part('battery', 'house-bank', 'House bank LFP 2 × 12.8 V 200 Ah', 560, 400, { chemistry: 'lfp', nominalVoltageV: 12.8,
       capacityAh: 200, internalResistanceOhm: 0.003, seriesCount: 2, parallelCount: 1 }),
@@ -77,15 +80,15 @@ export function createDemoDesign(): Design {
     part('bus-bar', 'pos-bus', 'Positive bus', 1000, 260, { ratingA: 300, polarity: 'positive', studs: 6 }),
     part('bus-bar', 'neg-bus', 'Negative bus', 1000, 560, { ratingA: 300, polarity: 'negative', studs: 6 }),
     part('fuse', 'solar-fuse', 'Solar charge fuse 60 A', 860, 100, { family: 'strip-bolt-down', ratingA: 60, dcVoltageRatingV: 32,
-      interruptingRatingA: 2000 }),
+      interruptingRatingA: STRIP_FUSE_AIC_A }),
     part('fuse', 'dcdc-out-fuse', 'DC-DC output fuse 40 A', 860, 420, { family: 'strip-bolt-down', ratingA: 40,
-      dcVoltageRatingV: 32, interruptingRatingA: 2000 }),
+      dcVoltageRatingV: 32, interruptingRatingA: STRIP_FUSE_AIC_A }),
     // Finding 1: 100 A is below 125 % of the inverter's ≈ 87 A full-load draw.
     part('fuse', 'inverter-fuse', 'Inverter fuse 100 A', 1140, 100, { family: 'strip-bolt-down', ratingA: 100,
-      dcVoltageRatingV: 32, interruptingRatingA: 2000 }),
+      dcVoltageRatingV: 32, interruptingRatingA: STRIP_FUSE_AIC_A }),
     part('inverter', 'inverter', 'Inverter 2 kW', 1320, 60, { continuousW: 2000, surgeW: 4000, efficiency: 0.9 }),
     part('fuse', 'panel-fuse', 'Panel feed fuse 60 A', 1140, 300, { family: 'strip-bolt-down', ratingA: 60, dcVoltageRatingV: 32,
-      interruptingRatingA: 2000 }),
+      interruptingRatingA: STRIP_FUSE_AIC_A }),
     part('fuse-panel', 'panel', 'Habitation fuse panel', 1260, 400, { ratingA: 100, ways: 6, wayRatingsA: [10, 10, 15, 10, 10, 5],
       family: 'blade-regular', dcVoltageRatingV: 32, interruptingRatingA: 1000 }),
     part('load', 'fridge', 'Compressor fridge', 1480, 240, { model: 'power', powerW: 55, duty: 'continuous', critical: false,
@@ -104,23 +107,23 @@ export function createDemoDesign(): Design {
     wire('pv-pos', 'Array + to controller', 'roof-array.pos', 'mppt.pv-pos', 'awg-6', 6, 'red', { sheathed: true }),
     wire('pv-neg', 'Array − to controller', 'roof-array.neg', 'mppt.pv-neg', 'awg-6', 6, 'black', { sheathed: true }),
     wire('mppt-out-pos', 'Controller + to solar fuse', 'solar-fuse.load', 'mppt.bat-pos', 'awg-6', 1.5, 'red'),
-    wire('solar-feed', 'Bus to solar fuse', 'pos-bus.d', 'solar-fuse.line', 'awg-6', 0.2, 'red'),
+    wire('solar-feed', 'Bus to solar fuse', 'pos-bus.d', 'solar-fuse.line', 'awg-2/0', 0.1, 'red'),
     wire('mppt-out-neg', 'Controller − to bus', 'mppt.bat-neg', 'neg-bus.d', 'awg-6', 1.7, 'black'),
     wire('start-pos', 'Starter + to DC-DC fuse', 'starter-batteries.pos', 'dcdc-in-fuse.line', 'awg-6', 0.3, 'red', { sheathed: true }),
     wire('dcdc-in-pos', 'DC-DC feed from cab', 'dcdc-in-fuse.load', 'dcdc.in-pos', 'awg-6', 5.5, 'red', { sheathed: true }),
     wire('dcdc-in-neg', 'DC-DC return to cab', 'dcdc.in-neg', 'starter-batteries.neg', 'awg-6', 5.8, 'black', { sheathed: true }),
     wire('dcdc-out-pos', 'DC-DC output to fuse', 'dcdc.out-pos', 'dcdc-out-fuse.load', 'awg-8', 1.2, 'red'),
-    wire('dcdc-out-feed', 'Bus to DC-DC fuse', 'pos-bus.e', 'dcdc-out-fuse.line', 'awg-8', 0.2, 'red'),
+    wire('dcdc-out-feed', 'Bus to DC-DC fuse', 'pos-bus.e', 'dcdc-out-fuse.line', 'awg-2/0', 0.1, 'red'),
     wire('dcdc-out-neg', 'DC-DC output −', 'dcdc.out-neg', 'neg-bus.e', 'awg-8', 1.4, 'black'),
     wire('bank-pos', 'Bank + to main fuse', 'house-bank.pos', 'main-fuse.line', 'awg-2/0', 0.2, 'red', { sheathed: true }),
     wire('fuse-switch', 'Main fuse to switch', 'main-fuse.load', 'main-switch.a', 'awg-2/0', 0.4, 'red', { sheathed: true }),
     wire('switch-bus', 'Switch to positive bus', 'main-switch.b', 'pos-bus.a', 'awg-2/0', 0.5, 'red', { sheathed: true }),
     wire('bank-neg', 'Bank − to shunt', 'house-bank.neg', 'shunt.battery', 'awg-2/0', 0.3, 'black'),
     wire('shunt-bus', 'Shunt to negative bus', 'shunt.system', 'neg-bus.a', 'awg-2/0', 0.4, 'black'),
-    wire('inverter-feed', 'Bus to inverter fuse', 'pos-bus.b', 'inverter-fuse.line', 'awg-2', 0.2, 'red'),
+    wire('inverter-feed', 'Bus to inverter fuse', 'pos-bus.b', 'inverter-fuse.line', 'awg-2/0', 0.1, 'red'),
     wire('inverter-pos', 'Inverter +', 'inverter-fuse.load', 'inverter.pos', 'awg-2', 1.5, 'red'),
     wire('inverter-neg', 'Inverter −', 'inverter.neg', 'neg-bus.b', 'awg-2', 1.7, 'black'),
-    wire('panel-feed', 'Bus to panel fuse', 'pos-bus.c', 'panel-fuse.line', 'awg-6', 0.2, 'red'),
+    wire('panel-feed', 'Bus to panel fuse', 'pos-bus.c', 'panel-fuse.line', 'awg-2/0', 0.1, 'red'),
     wire('panel-pos', 'Panel feed +', 'panel-fuse.load', 'panel.in-pos', 'awg-6', 1.2, 'red'),
     wire('panel-neg', 'Panel feed −', 'panel.in-neg', 'neg-bus.c', 'awg-6', 1.4, 'black'),
     wire('fridge-pos', 'Fridge +', 'panel.out1', 'fridge.pos', 'awg-12', 3, 'red', { bundledCount: 4, installation: 'bundled' }),

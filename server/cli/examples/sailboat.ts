@@ -12,7 +12,7 @@ const part = <T extends PartType>(type: T, id: string, label: string, x: number,
   makePart(SETTINGS, type, id, label, { x, y }, params)
 const wire = (id: string, label: string, from: string, to: string, sizeId: Conductor['sizeId'], lengthM: number, options: ConductorOptions = {}) =>
   makeConductor(id, label, from, to, sizeId, lengthM, { material: 'tinned-copper', colour: label.includes('−') ? 'yellow' : 'red', ...options })
-const strip = (ratingA: number) => ({ family: 'strip-bolt-down' as const, ratingA, dcVoltageRatingV: 32, interruptingRatingA: 2000 })
+const strip = (ratingA: number) => ({ family: 'strip-bolt-down' as const, ratingA, dcVoltageRatingV: 32, interruptingRatingA: 6000 }) // ~6 kA at 32 V DC (shared/protection/families.ts, recalled)
 const on = { on: true, level: 1 }
 
 export function sailboat24V(): Design {
@@ -54,10 +54,10 @@ export function sailboat24V(): Design {
     conductors: [
       wire('pv-pos', 'Array + to controller', 'arch-array.pos', 'mppt.pv-pos', 'awg-10', 5, { sheathed: true }),
       wire('pv-neg', 'Array − to controller', 'arch-array.neg', 'mppt.pv-neg', 'awg-10', 5, { sheathed: true }),
-      wire('solar-feed', 'Bus to solar fuse', 'pos-bus.c', 'solar-fuse.line', 'awg-10', 0.2),
+      wire('solar-feed', 'Bus to solar fuse', 'pos-bus.c', 'solar-fuse.line', 'awg-2/0', 0.1),
       wire('mppt-out-pos', 'Controller + from solar fuse', 'solar-fuse.load', 'mppt.bat-pos', 'awg-10', 1.5),
       wire('mppt-out-neg', 'Controller − to bus', 'mppt.bat-neg', 'neg-bus.c', 'awg-10', 1.7),
-      wire('charger-feed', 'Bus to charger fuse', 'pos-bus.e', 'charger-fuse.line', 'awg-8', 0.2),
+      wire('charger-feed', 'Bus to charger fuse', 'pos-bus.e', 'charger-fuse.line', 'awg-2/0', 0.1),
       wire('charger-pos', 'Charger +', 'charger-fuse.load', 'shore-charger.bat-pos', 'awg-8', 2),
       wire('charger-neg', 'Charger −', 'shore-charger.bat-neg', 'neg-bus.e', 'awg-8', 2.2),
       wire('bank-pos', 'Bank + to main fuse', 'house-bank.pos', 'main-fuse.line', 'awg-2/0', 0.15, { sheathed: true }),
@@ -65,10 +65,10 @@ export function sailboat24V(): Design {
       wire('switch-bus', 'Switch to positive bus', 'main-switch.b', 'pos-bus.a', 'awg-2/0', 0.6, { sheathed: true }),
       wire('bank-neg', 'Bank − to shunt', 'house-bank.neg', 'shunt.battery', 'awg-2/0', 0.3),
       wire('shunt-bus', 'Shunt − to negative bus', 'shunt.system', 'neg-bus.a', 'awg-2/0', 0.5),
-      wire('windlass-feed', 'Bus to windlass breaker', 'pos-bus.b', 'windlass-breaker.line', 'awg-6', 0.3),
+      wire('windlass-feed', 'Bus to windlass breaker', 'pos-bus.b', 'windlass-breaker.line', 'awg-2/0', 0.1),
       wire('windlass-pos', 'Windlass + (to bow)', 'windlass-breaker.load', 'windlass.pos', 'awg-6', 9, { sheathed: true }),
       wire('windlass-neg', 'Windlass − (from bow)', 'windlass.neg', 'neg-bus.b', 'awg-6', 9.3, { sheathed: true }),
-      wire('panel-feed', 'Bus to panel fuse', 'pos-bus.d', 'panel-fuse.line', 'awg-6', 0.2),
+      wire('panel-feed', 'Bus to panel fuse', 'pos-bus.d', 'panel-fuse.line', 'awg-2/0', 0.1),
       wire('panel-pos', 'Panel feed +', 'panel-fuse.load', 'panel.in-pos', 'awg-6', 1.5),
       wire('panel-neg', 'Panel feed −', 'panel.in-neg', 'neg-bus.d', 'awg-6', 1.7),
       wire('nav-pos', 'Nav lights +', 'panel.out1', 'nav-lights.pos', 'awg-16', 6, { sheathed: true }),

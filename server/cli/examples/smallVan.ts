@@ -11,7 +11,7 @@ const part = <T extends PartType>(type: T, id: string, label: string, x: number,
   makePart(SETTINGS, type, id, label, { x, y }, params)
 const wire = (id: string, label: string, from: string, to: string, sizeId: Conductor['sizeId'], lengthM: number, options: ConductorOptions = {}) =>
   makeConductor(id, label, from, to, sizeId, lengthM, { colour: label.includes('−') ? 'black' : 'red', ...options })
-const strip = (ratingA: number) => ({ family: 'strip-bolt-down' as const, ratingA, dcVoltageRatingV: 32, interruptingRatingA: 2000 })
+const strip = (ratingA: number) => ({ family: 'strip-bolt-down' as const, ratingA, dcVoltageRatingV: 32, interruptingRatingA: 6000 }) // ~6 kA at 32 V DC (shared/protection/families.ts, recalled)
 
 export function smallVan12V(): Design {
   return {
@@ -46,7 +46,7 @@ export function smallVan12V(): Design {
     conductors: [
       wire('pv-pos', 'Array + to controller', 'roof-array.pos', 'mppt.pv-pos', 'awg-8', 4, { sheathed: true }),
       wire('pv-neg', 'Array − to controller', 'roof-array.neg', 'mppt.pv-neg', 'awg-8', 4, { sheathed: true }),
-      wire('solar-feed', 'Bus to solar fuse', 'pos-bus.c', 'solar-fuse.line', 'awg-8', 0.2),
+      wire('solar-feed', 'Bus to solar fuse', 'pos-bus.c', 'solar-fuse.line', 'awg-1/0', 0.1),
       wire('mppt-out-pos', 'Controller + from solar fuse', 'solar-fuse.load', 'mppt.bat-pos', 'awg-8', 1),
       wire('mppt-out-neg', 'Controller − to bus', 'mppt.bat-neg', 'neg-bus.c', 'awg-8', 1.2),
       wire('bank-pos', 'Battery + to main fuse', 'house-bank.pos', 'main-fuse.line', 'awg-1/0', 0.2, { sheathed: true }),
@@ -54,10 +54,10 @@ export function smallVan12V(): Design {
       wire('switch-bus', 'Switch to positive bus', 'main-switch.b', 'pos-bus.a', 'awg-1/0', 0.3, { sheathed: true }),
       wire('bank-neg', 'Battery − to shunt', 'house-bank.neg', 'shunt.battery', 'awg-1/0', 0.3),
       wire('shunt-bus', 'Shunt − to negative bus', 'shunt.system', 'neg-bus.a', 'awg-1/0', 0.3),
-      wire('inverter-feed', 'Bus to inverter fuse', 'pos-bus.b', 'inverter-fuse.line', 'awg-6', 0.2),
+      wire('inverter-feed', 'Bus to inverter fuse', 'pos-bus.b', 'inverter-fuse.line', 'awg-1/0', 0.1),
       wire('inverter-pos', 'Inverter +', 'inverter-fuse.load', 'inverter.pos', 'awg-6', 1),
       wire('inverter-neg', 'Inverter −', 'inverter.neg', 'neg-bus.b', 'awg-6', 1.2),
-      wire('panel-feed', 'Bus to panel fuse', 'pos-bus.d', 'panel-fuse.line', 'awg-8', 0.2),
+      wire('panel-feed', 'Bus to panel fuse', 'pos-bus.d', 'panel-fuse.line', 'awg-1/0', 0.1),
       wire('panel-pos', 'Panel feed +', 'panel-fuse.load', 'panel.in-pos', 'awg-8', 1.5),
       wire('panel-neg', 'Panel feed −', 'panel.in-neg', 'neg-bus.d', 'awg-8', 1.5),
       wire('fridge-pos', 'Fridge +', 'panel.out1', 'fridge.pos', 'awg-12', 3),
