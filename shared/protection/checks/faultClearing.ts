@@ -47,14 +47,23 @@ function backupFor(device: ProtectionDevice, context: ResolvedContext, currentA:
   return upstreamChain(device, context.byId).find((up) => deviceBand(up.familyId, up.ratingA).maxClearS(currentA) < withinS)
 }
 
+/**
+ * The fault position this device (and everything upstream of it) fails to clear before the conductor
+ * reaches its limit — the one with the smallest margin (withstand ÷ clearing time) — or null.
+ */
+export function unclearedFault(device: ProtectionDevice, context: ResolvedContext): Case | null {
+  return (
+    faultCases(device)
+      .filter((c) => !(c.clearS < c.withstandS) && !backupFor(device, context, c.currentA, c.withstandS))
+      .sort((a, b) => a.withstandS / a.clearS - b.withstandS / b.clearS)[0] ?? null
+  )
+}
+
 function run(device: ProtectionDevice, context: ResolvedContext): Finding[] {
   const conductor = device.conductor
   if (!conductor) return []
   const band = deviceBand(device.familyId, device.ratingA)
-  // Worst case: the smallest clearing margin (withstand ÷ clearing time) among the fault positions.
-  const failing = faultCases(device)
-    .filter((c) => !(c.clearS < c.withstandS) && !backupFor(device, context, c.currentA, c.withstandS))
-    .sort((a, b) => a.withstandS / a.clearS - b.withstandS / b.clearS)[0]
+  const failing = unclearedFault(device, context)
   if (!failing) return []
   const limit = shortCircuitLimit({ insulationRatingC: conductor.insulationRatingC, insulation: conductor.insulation })
   const floorS = band.floor?.timeS

@@ -4,7 +4,8 @@ import { DEVICE_FAMILY_IDS, standardRatingsA, type DeviceFamilyId } from '../rat
 import { deviceBand, getTimeCurrentFamily, hasTimeCurrentModel } from '../timeCurrent'
 import { amps, seconds } from './_lib/format'
 import { partIdOf } from './_lib/chain'
-import type { LoadStart, ProtectionDevice, ProtectionRule } from './types'
+import { unclearedFault } from './faultClearing'
+import type { LoadStart, ProtectionDevice, ProtectionRule, ResolvedContext } from './types'
 
 const RULE_ID = 'motor-start-nuisance-open'
 const SOURCE =
@@ -21,12 +22,19 @@ function ratingsOf(familyId: string): readonly number[] {
   return (DEVICE_FAMILY_IDS as readonly string[]).includes(familyId) ? standardRatingsA(familyId as DeviceFamilyId) : []
 }
 
-function ridesThrough(familyId: string, ratingA: number, currentA: number, durationS: number): boolean {
-  return deviceBand(familyId, ratingA).minMeltS(currentA) > durationS
+/** The replacement carries the start and still clears the conductor's faults in time. */
+function fits(device: ProtectionDevice, familyId: string, ratingA: number, pulse: Pulse, context: ResolvedContext): boolean {
+  if (!(deviceBand(familyId, ratingA).minMeltS(pulse.currentA) > pulse.durationS)) return false
+  return unclearedFault({ ...device, familyId, ratingA }, context) === null
 }
 
-/** A time-delay family stocked at this rating that carries the pulse, same size first. */
-function timeDelayAlternative(device: ProtectionDevice, currentA: number, durationS: number): string | null {
+interface Pulse {
+  currentA: number
+  durationS: number
+}
+
+/** A time-delay family stocked at this rating that carries the pulse and still protects the conductor, same size first. */
+function timeDelayAlternative(device: ProtectionDevice, pulse: Pulse, context: ResolvedContext): string | null {
   const preferred = SAME_SIZE_TIME_DELAY[device.familyId]
   const candidates = [preferred, ...DEVICE_FAMILY_IDS].filter((id): id is string => !!id && id !== device.familyId)
   for (const familyId of candidates) {
@@ -35,31 +43,32 @@ function timeDelayAlternative(device: ProtectionDevice, currentA: number, durati
     // Thermal breakers ride through starts but cannot clear fast faults (see faultClearing.ts).
     if (!band.timeDelay || band.kind === 'thermal-breaker') continue
     if (!ratingsOf(familyId).includes(device.ratingA)) continue
-    if (ridesThrough(familyId, device.ratingA, currentA, durationS)) return familyId
+    if (fits(device, familyId, device.ratingA, pulse, context)) return familyId
   }
   return null
 }
 
-/** The smallest higher rating of the same family, within what the conductor allows, that carries the pulse. */
-function nextRatingThatRides(device: ProtectionDevice, currentA: number, durationS: number): number | null {
+/** The smallest higher rating of the same family, within what the conductor allows, that carries the pulse and still protects it. */
+function nextRatingThatRides(device: ProtectionDevice, pulse: Pulse, context: ResolvedContext): number | null {
   const limitA = device.conductor?.maxDeviceRatingA
   if (limitA === undefined) return null
   for (const r of ratingsOf(device.familyId)) {
     if (r <= device.ratingA || r > limitA + 1e-9) continue
-    if (ridesThrough(device.familyId, r, currentA, durationS)) return r
+    if (fits(device, device.familyId, r, pulse, context)) return r
   }
   return null
 }
 
-function checkStart(device: ProtectionDevice, start: LoadStart, scenarioId: string | undefined): Finding | null {
+function checkStart(device: ProtectionDevice, start: LoadStart, context: ResolvedContext): Finding | null {
   if (!(start.runningCurrentA > 0) || !(start.inrushMultiple > 0) || !(start.startDurationS > 0)) return null
   const band = deviceBand(device.familyId, device.ratingA)
   const startA = (device.baseCurrentA ?? 0) + start.inrushMultiple * start.runningCurrentA
   const minOpenS = band.minMeltS(startA)
   if (minOpenS > start.startDurationS) return null
   const surelyOpens = band.maxClearS(startA) <= start.startDurationS
-  const alternative = timeDelayAlternative(device, startA, start.startDurationS)
-  const nextRating = nextRatingThatRides(device, startA, start.startDurationS)
+  const pulse = { currentA: startA, durationS: start.startDurationS }
+  const alternative = timeDelayAlternative(device, pulse, context)
+  const nextRating = nextRatingThatRides(device, pulse, context)
   const ideas = [
     alternative ? `use a time-delay device: ${getTimeCurrentFamily(alternative).label}, ${amps(device.ratingA)}` : null,
     nextRating ? `use the next rating the conductor allows that rides through: ${amps(nextRating)}` : null,
@@ -81,7 +90,7 @@ function checkStart(device: ProtectionDevice, start: LoadStart, scenarioId: stri
     suggestion: ideas.length
       ? { text: capitalise(`${ideas.join('; or ')}.`) }
       : { text: 'Use a time-delay device or a soft-start; check the conductor allows a larger rating.' },
-    scenarioId,
+    scenarioId: context.scenarioId,
   })
 }
 
@@ -96,7 +105,7 @@ export const motorStartRule: ProtectionRule = {
   run(device, context) {
     const findings: Finding[] = []
     for (const start of device.loadStarts ?? []) {
-      const f = checkStart(device, start, context.scenarioId)
+      const f = checkStart(device, start, context)
       if (f) findings.push(f)
     }
     return findings

@@ -10,22 +10,28 @@ const SOURCE =
   'Selectivity by time-current bands: the downstream maximum clearing time must be below the upstream minimum ' +
   'melting time at the downstream fault current (IEC 60269-1 / IEC 60364-5-53 principle, recalled; bands per family)'
 
-/** The largest fault current a downstream fault draws through this device. */
-function downstreamFaultA(device: ProtectionDevice): number | undefined {
-  return positive(device.faultCurrentAtDeviceA) ?? positive(device.faultCurrentFarEndA)
+/** Fault currents a downstream fault draws through this device: at its terminals (largest) and far end. */
+function downstreamFaultsA(device: ProtectionDevice): number[] {
+  return [positive(device.faultCurrentAtDeviceA), positive(device.faultCurrentFarEndA)].filter((a): a is number => a !== undefined)
 }
 
 function run(device: ProtectionDevice, context: ResolvedContext): Finding[] {
-  const faultA = downstreamFaultA(device)
-  if (faultA === undefined) return []
+  const faultsA = downstreamFaultsA(device)
+  if (faultsA.length === 0) return []
   const down = deviceBand(device.familyId, device.ratingA)
-  const clearS = down.maxClearS(faultA)
   const findings: Finding[] = []
   for (const up of upstreamChain(device, context.byId)) {
     const upBand = deviceBand(up.familyId, up.ratingA)
-    const upMinS = upBand.minMeltS(faultA)
+    // The first fault position where the upstream device may open before the downstream one has cleared.
     // Neither opening is a fault-clearing problem (faultClearing.ts), not a selectivity one.
-    if (clearS < upMinS || (clearS === Infinity && upMinS === Infinity)) continue
+    const faultA = faultsA.find((a) => {
+      const clear = down.maxClearS(a)
+      const upMin = upBand.minMeltS(a)
+      return !(clear < upMin) && !(clear === Infinity && upMin === Infinity)
+    })
+    if (faultA === undefined) continue
+    const clearS = down.maxClearS(faultA)
+    const upMinS = upBand.minMeltS(faultA)
     findings.push(
       makeFinding({
         ruleId: RULE_ID,

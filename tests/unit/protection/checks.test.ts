@@ -41,6 +41,14 @@ describe('motor-start-nuisance-open (device band vs start pulse; inrush common p
     expect(f.severity).toBe('warning')
     expect(f.suggestion!.text).toMatch(/30\u00a0A/)
   })
+  it('never suggests a device that would ride through the start but leave the conductor unprotected', () => {
+    // 18 AWG, 105 °C: I²t = (0.040095 · 1 624)² = 4 240 A²s; far-end fault 100 A → withstand 0.424 s.
+    // Blade 10 A clears 10 In in 0.1·(6/10)² = 36 ms; the 6.3 × 32 mm time-delay only within 120·(2/10)² = 4.8 s.
+    const conductor = { ...awg14, id: 'W18', sizeId: 'awg-18', maxDeviceRatingA: 10 }
+    const findings = run([{ id: 'F1', familyId: 'blade-regular', ratingA: 10, conductor, faultCurrentFarEndA: 100, loadStarts: [pump] }])
+    expect(findings.map((f) => f.ruleId)).toEqual(['motor-start-nuisance-open'])
+    expect(findings[0].suggestion!.text).not.toMatch(/6\.3 × 32/)
+  })
   it('adds the current of the other loads to the start pulse', () => {
     const small = { loadId: 'fan', runningCurrentA: 2, inrushMultiple: 3, startDurationS: 0.1 }
     const d = { id: 'F3', familyId: 'blade-regular', ratingA: 10, loadStarts: [small] }
@@ -115,6 +123,16 @@ describe('not-selective (downstream max clearing < upstream min melting at the d
     expect(found[0].partIds.sort()).toEqual(['F30', 'F35'])
     expect(rel(found[0].measured!.value, 0.1 * (6 / (1000 / 30)) ** 2)).toBeLessThan(1e-6)
     expect(rel(found[0].limit!.value, 0.01 * (15 / (1000 / 35)) ** 2)).toBeLessThan(1e-6)
+  })
+})
+
+describe('not-selective at the far-end fault current', () => {
+  it('checks the far-end current when no terminal current is given', () => {
+    const devices = [
+      { id: 'F30', familyId: 'blade-regular', ratingA: 30, faultCurrentFarEndA: 1000, upstreamId: 'F35' },
+      { id: 'F35', familyId: 'blade-regular', ratingA: 35 },
+    ]
+    expect(byRule(run(devices), 'not-selective')).toHaveLength(1)
   })
 })
 
