@@ -155,6 +155,18 @@ export function createDesignMutations(doc: Y.Doc) {
     setName(name: string) {
       transact(() => meta.set('name', name))
     },
+    /** Replaces parts, conductors, scenarios and settings (keeps the design's id and name). */
+    replaceContent(design: Design) {
+      transact(() => {
+        parts.clear()
+        conductors.clear()
+        scenarios.delete(0, scenarios.length)
+        for (const [key, value] of Object.entries(design.settings)) settings.set(key, value)
+        for (const part of design.parts) parts.set(part.id, partToY(part))
+        for (const conductor of design.conductors) conductors.set(conductor.id, conductorToY(conductor))
+        scenarios.push(design.scenarios.map(scenarioToY))
+      })
+    },
     setScenarioLoad(scenarioId: string, partId: string, state: { on: boolean; level: number }) {
       transact(() => {
         scenarios.forEach((scenario) => {
