@@ -76,7 +76,8 @@ export function conductorAmpacityA(input: AmpacityInput): AmpacityResult {
 
 function validate(input: AmpacityInput): void {
   getConductorSize(input.sizeId)
-  materialSchema.parse(input.material)
+  if (!materialSchema.safeParse(input.material).success)
+    throw new ConductorInputError('material', `must be one of ${materialSchema.options.join(', ')}`)
   if (!INSULATION_RATINGS_C.includes(input.insulationRatingC))
     throw new ConductorInputError('insulationRatingC', `must be one of ${INSULATION_RATINGS_C.join(', ')} °C`)
   requireFinite(input.ambientC, 'ambientC')

@@ -1,6 +1,7 @@
 import { getMaterial, MATERIALS, type Material } from './materials'
 import { getConductorSize, type ConductorSizeId } from './sizes'
 import { IEC_60228_MAX_RESISTANCE_20C } from './iec60228'
+import { MM2_PER_CMIL } from '../units/area'
 import { ConductorInputError, requireFinite, requireNonNegative } from './_lib/inputs'
 
 /**
@@ -35,7 +36,14 @@ export interface ResistanceInput {
   temperatureC: number
   /** metric sizes only; default 2 */
   iecClass?: IecConductorClass
+  /**
+   * AWG sizes only: whose area the gauge number means. 'astm-b258' (default) for building wire and boat
+   * cable; 'sae-j1128' for automotive cable, which has 5–12 % less copper than the AWG size of that number.
+   */
+  gaugeStandard?: GaugeStandard
 }
+
+export type GaugeStandard = 'astm-b258' | 'sae-j1128'
 
 export interface ResistanceBasis {
   /** Ω per metre at 20 °C */
@@ -50,16 +58,22 @@ export interface ResistanceBasis {
  * - metric: the IEC 60228 maximum resistance of the size and class; aluminium scales the plain-copper
  *   value by ρAl/ρCu (no verified IEC 60228 aluminium figures on file).
  */
-export function resistanceBasis(sizeId: ConductorSizeId, material: Material, iecClass: IecConductorClass = 2): ResistanceBasis {
+export function resistanceBasis(
+  sizeId: ConductorSizeId, material: Material, iecClass: IecConductorClass = 2, gaugeStandard: GaugeStandard = 'astm-b258',
+): ResistanceBasis {
   const size = getConductorSize(sizeId)
   const m = getMaterial(material)
   if (size.system === 'awg') {
     const tinned = material === 'tinned-copper'
     const rho = tinned ? MATERIALS.copper.resistivity20OhmMm2PerM * AWG_COATED_TO_PLAIN_RATIO : m.resistivity20OhmMm2PerM
+    const sae = gaugeStandard === 'sae-j1128'
+    if (sae && size.saeAreaCmil === undefined)
+      throw new ConductorInputError('gaugeStandard', `no SAE J1127/J1128 area on file for ${size.label}`)
+    const areaMm2 = sae ? size.saeAreaCmil! * MM2_PER_CMIL : size.areaMm2
     return {
-      ohmPerMAt20: (rho / size.areaMm2) * STRANDING_LAY_FACTOR,
+      ohmPerMAt20: (rho / areaMm2) * STRANDING_LAY_FACTOR,
       method:
-        `ρ20 / A × ${STRANDING_LAY_FACTOR} (stranding lay factor), A = ${size.areaMm2.toFixed(3)} mm² (ASTM B258)` +
+        `ρ20 / A × ${STRANDING_LAY_FACTOR} (stranding lay factor), A = ${areaMm2.toFixed(3)} mm² (${sae ? 'SAE J1127/J1128' : 'ASTM B258'})` +
         (tinned ? `, × ${AWG_COATED_TO_PLAIN_RATIO} coated-strand ratio` : ''),
       source:
         `${tinned ? MATERIALS.copper.source : m.source}; lay factor` +
@@ -107,6 +121,6 @@ export function resistancePerMetreOhm(input: Omit<ResistanceInput, 'lengthM'>): 
   if (input.temperatureC < MIN_TEMPERATURE_C || input.temperatureC > MAX_TEMPERATURE_C)
     throw new ConductorInputError('temperatureC', `must be between ${MIN_TEMPERATURE_C} and ${MAX_TEMPERATURE_C} °C`)
   const m = getMaterial(input.material)
-  const basis = resistanceBasis(input.sizeId, input.material, input.iecClass ?? 2)
+  const basis = resistanceBasis(input.sizeId, input.material, input.iecClass ?? 2, input.gaugeStandard ?? 'astm-b258')
   return basis.ohmPerMAt20 * (1 + m.alpha20PerC * (input.temperatureC - 20))
 }

@@ -9,23 +9,26 @@ export type SizeSystem = 'awg' | 'metric'
 
 /** AWG gauge number n of ASTM B258: 1/0 → 0, 2/0 → −1, 3/0 → −2, 4/0 → −3. */
 const AWG_GAUGES = [
-  { label: '18', n: 18, necAreaCmil: 1620 },
-  { label: '16', n: 16, necAreaCmil: 2580 },
-  { label: '14', n: 14, necAreaCmil: 4110 },
-  { label: '12', n: 12, necAreaCmil: 6530 },
-  { label: '10', n: 10, necAreaCmil: 10380 },
-  { label: '8', n: 8, necAreaCmil: 16510 },
-  { label: '6', n: 6, necAreaCmil: 26240 },
-  { label: '4', n: 4, necAreaCmil: 41740 },
+  { label: '18', n: 18, necAreaCmil: 1620, saeAreaCmil: 1537 },
+  { label: '16', n: 16, necAreaCmil: 2580, saeAreaCmil: 2336 },
+  { label: '14', n: 14, necAreaCmil: 4110, saeAreaCmil: 3702 },
+  { label: '12', n: 12, necAreaCmil: 6530, saeAreaCmil: 5833 },
+  { label: '10', n: 10, necAreaCmil: 10380, saeAreaCmil: 9343 },
+  { label: '8', n: 8, necAreaCmil: 16510, saeAreaCmil: 14810 },
+  { label: '6', n: 6, necAreaCmil: 26240, saeAreaCmil: 24538 },
+  { label: '4', n: 4, necAreaCmil: 41740, saeAreaCmil: 37360 },
   { label: '3', n: 3, necAreaCmil: 52620 },
-  { label: '2', n: 2, necAreaCmil: 66360 },
-  { label: '1', n: 1, necAreaCmil: 83690 },
-  { label: '1/0', n: 0, necAreaCmil: 105600 },
-  { label: '2/0', n: -1, necAreaCmil: 133100 },
-  { label: '3/0', n: -2, necAreaCmil: 167800 },
-  { label: '4/0', n: -3, necAreaCmil: 211600 },
+  { label: '2', n: 2, necAreaCmil: 66360, saeAreaCmil: 62450 },
+  { label: '1', n: 1, necAreaCmil: 83690, saeAreaCmil: 77790 },
+  { label: '1/0', n: 0, necAreaCmil: 105600, saeAreaCmil: 98980 },
+  { label: '2/0', n: -1, necAreaCmil: 133100, saeAreaCmil: 125100 },
+  { label: '3/0', n: -2, necAreaCmil: 167800, saeAreaCmil: 158600 },
+  { label: '4/0', n: -3, necAreaCmil: 211600, saeAreaCmil: 205500 },
 ] as const
 // necAreaCmil: NEC (NFPA 70) Chapter 9 Table 8, "Area, circular mils" column — the Code's rounded areas.
+// saeAreaCmil: SAE J1127/J1128 (automotive cable) areas, which are smaller than AWG of the same number
+// (a cable maker's 2023 catalogue appendix reproducing the ABYC comparison table; standards.md §2 [V]).
+// No SAE figure is on file for 3 AWG.
 
 /** IEC 60228 nominal cross-sections offered, mm². */
 const METRIC_AREAS_MM2 = [0.75, 1, 1.5, 2.5, 4, 6, 10, 16, 25, 35, 50, 70, 95, 120] as const
@@ -55,6 +58,8 @@ export interface ConductorSize {
   diameterMm?: number
   /** AWG only: NEC Chapter 9 Table 8's rounded area, for display beside Code tables. */
   necAreaCmil?: number
+  /** AWG only: the SAE J1127/J1128 area of automotive cable with this gauge number. */
+  saeAreaCmil?: number
   /** Position in the ascending order of its system (0 = smallest). */
   rank: number
 }
@@ -82,6 +87,7 @@ const AWG_SIZES: ConductorSize[] = AWG_GAUGES.map((g, rank) => {
     areaMm2: areaCmil * MM2_PER_CMIL,
     diameterMm: awgDiameterMm(g.n),
     necAreaCmil: g.necAreaCmil,
+    saeAreaCmil: 'saeAreaCmil' in g ? g.saeAreaCmil : undefined,
     rank,
   }
 })

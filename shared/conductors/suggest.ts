@@ -3,7 +3,7 @@ import type { CodeProfile, Installation, InsulationRatingC } from './profiles'
 import { getConductorSize, sizesInOrder, type ConductorSizeId, type SizeSystem } from './sizes'
 import { conductorAmpacityA, type AmpacityResult } from './ampacity'
 import { circuitDrop } from './voltageDrop'
-import type { IecConductorClass } from './resistance'
+import type { GaugeStandard, IecConductorClass } from './resistance'
 import { ConductorInputError, requireNonNegative, requirePositive } from './_lib/inputs'
 
 export interface SuggestInput {
@@ -27,6 +27,7 @@ export interface SuggestInput {
    */
   conductorTemperatureC?: number
   iecClass?: IecConductorClass
+  gaugeStandard?: GaugeStandard
   /** smallest size to consider; default per profile (MINIMUM_SIZES) */
   minSizeId?: ConductorSizeId
 }
@@ -80,6 +81,7 @@ export function smallestPassingSize(input: SuggestInput): SuggestResult | null {
     const drop = circuitDrop({
       currentA: input.currentA, sizeId: size.id, material: input.material, lengthM: input.lengthM,
       temperatureC: conductorTemperatureC, nominalV: input.nominalV, iecClass: input.iecClass,
+      gaugeStandard: input.gaugeStandard,
     })
     if (drop.dropPercent <= input.allowedDropPercent + 1e-12)
       return { sizeId: size.id, ampacity, dropV: drop.dropV, dropPercent: drop.dropPercent, conductorTemperatureC }

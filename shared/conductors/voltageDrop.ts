@@ -1,7 +1,7 @@
 import type { Material } from './materials'
 import type { CodeProfile } from './profiles'
 import { sizesInOrder, type ConductorSize, type SizeSystem } from './sizes'
-import { conductorResistanceOhm, type IecConductorClass } from './resistance'
+import { conductorResistanceOhm, type GaugeStandard, type IecConductorClass } from './resistance'
 import { requireFinite, requireNonNegative, requirePositive } from './_lib/inputs'
 
 /**
@@ -66,6 +66,7 @@ export interface CircuitDropInput {
   temperatureC: number
   nominalV: number
   iecClass?: IecConductorClass
+  gaugeStandard?: GaugeStandard
 }
 
 /** Drop over the out-and-back loop of a two-wire circuit with both conductors the same size. */
@@ -74,7 +75,7 @@ export function circuitDrop(input: CircuitDropInput): { loopResistanceOhm: numbe
     2 *
     conductorResistanceOhm({
       sizeId: input.sizeId, material: input.material, lengthM: input.lengthM,
-      temperatureC: input.temperatureC, iecClass: input.iecClass,
+      temperatureC: input.temperatureC, iecClass: input.iecClass, gaugeStandard: input.gaugeStandard,
     })
   const dropV = voltageDropV({ currentA: input.currentA, resistanceOhm: loopResistanceOhm })
   return { loopResistanceOhm, dropV, dropPercent: dropPercent(dropV, input.nominalV) }

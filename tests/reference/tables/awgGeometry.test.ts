@@ -51,3 +51,19 @@ describe('NEC Chapter 9 Table 8 rounded areas', () => {
     expect(Math.abs(s.areaCmil / cmil - 1)).toBeLessThan(0.003)
   })
 })
+
+describe('SAE J1127/J1128 areas (cable maker\'s 2023 catalogue appendix reproducing the ABYC table, standards.md §2 [V])', () => {
+  // [id, SAE cmil]
+  const SAE: [string, number][] = [
+    ['awg-18', 1537], ['awg-16', 2336], ['awg-14', 3702], ['awg-12', 5833], ['awg-10', 9343], ['awg-8', 14810],
+    ['awg-6', 24538], ['awg-4', 37360], ['awg-2', 62450], ['awg-1', 77790], ['awg-1/0', 98980], ['awg-2/0', 125100],
+    ['awg-3/0', 158600], ['awg-4/0', 205500],
+  ]
+  it.each(SAE)('%s: %i cmil, 3–12 %% below the ASTM B258 area', (id, cmil) => {
+    const s = getConductorSize(id)
+    expect(s.saeAreaCmil).toBe(cmil)
+    const shortfall = 1 - cmil / s.areaCmil
+    expect(shortfall).toBeGreaterThan(0.02)
+    expect(shortfall).toBeLessThan(0.12)
+  })
+})

@@ -154,6 +154,7 @@ describe('edge cases', () => {
     [{ installation: 'buried' }, /installation/],
     [{ profile: 'aircraft' }, /profile/],
     [{ sizeId: 'awg-0' }, /Unknown conductor size/],
+    [{ material: 'silver' }, /material: must be one of copper, tinned-copper, aluminium/],
   ])('rejects %o with a message naming the field', (patch, message) => {
     expect(() => amp(patch as never)).toThrow(message)
   })

@@ -34,6 +34,12 @@ describe('conductorResistanceOhm', () => {
     expect(r).toBeCloseTo(0.524 * 0.028264 * 58, 6)
   })
 
+  it('SAE J1127/J1128 cable of the same gauge number has less copper, so more resistance (10 AWG: 10 383 ÷ 9 343 cmil)', () => {
+    const astm = conductorResistanceOhm({ sizeId: 'awg-10', material: 'copper', lengthM: 1, temperatureC: 20 })
+    const sae = conductorResistanceOhm({ sizeId: 'awg-10', material: 'copper', lengthM: 1, temperatureC: 20, gaugeStandard: 'sae-j1128' })
+    expect(sae / astm).toBeCloseTo(10383 / 9343, 3)
+  })
+
   it.each([
     ['awg-4/0', 'copper'],
     ['awg-18', 'tinned-copper'],
@@ -97,6 +103,7 @@ describe('conductorResistanceOhm', () => {
       [{ temperatureC: 1000 }, /temperatureC: must be between/],
       [{ sizeId: 'awg-13' }, /Unknown conductor size/],
       [{ material: 'gold' }, /Unknown conductor material/],
+      [{ sizeId: 'awg-3', gaugeStandard: 'sae-j1128' }, /gaugeStandard: no SAE J1127\/J1128 area on file for 3 AWG/],
     ])('rejects %o', (patch, message) => {
       const input = { sizeId: 'awg-10', material: 'copper', lengthM: 1, temperatureC: 20, ...patch } as never
       expect(() => conductorResistanceOhm(input)).toThrow(message)
