@@ -31,10 +31,16 @@ export interface RequestOptions {
 }
 
 let onUnauthenticated: (() => void) | null = null
+let onForbidden: (() => void) | null = null
 
-/** Wired once at start-up (plugins/index.ts) so an expired session sends the user back to sign-in. */
+/** Wired once at start-up (router/guards.ts) so an expired session sends the user back to sign-in. */
 export function setUnauthenticatedHandler(handler: () => void): void {
   onUnauthenticated = handler
+}
+
+/** Wired once at start-up: a 403 may mean our role changed meanwhile, so the session is re-read. */
+export function setForbiddenHandler(handler: () => void): void {
+  onForbidden = handler
 }
 
 function toUrl(path: string, query?: Query): string {
@@ -77,6 +83,7 @@ export async function request<T>(method: string, path: string, options: RequestO
   if (!res.ok) {
     const error = await readError(res)
     if (error.status === 401 && error.code === 'unauthenticated' && !options.expectUnauthenticated) onUnauthenticated?.()
+    if (error.status === 403 && error.code === 'forbidden') onForbidden?.()
     throw error
   }
   if (res.status === 204) return undefined as T

@@ -1,6 +1,6 @@
 // Auth and role guards, and what happens when the server says the session expired.
 import type { Router } from 'vue-router'
-import { setUnauthenticatedHandler } from '@/api/http'
+import { setForbiddenHandler, setUnauthenticatedHandler } from '@/api/http'
 import { useNotifyStore } from '@/stores/notify'
 import { useSessionStore } from '@/stores/session'
 import { ROLE_LABELS } from '@shared/api/roles'
@@ -39,5 +39,18 @@ export function installGuards(router: Router): void {
     useNotifyStore().warning('Your session has expired. Sign in again to continue.')
     const current = router.currentRoute.value
     if (!current.meta.public) void router.push({ name: 'sign-in', query: { next: current.fullPath } })
+  })
+
+  // The role is read from the database on every request: a 403 may mean it changed, so menus follow.
+  setForbiddenHandler(() => {
+    const session = useSessionStore()
+    if (!session.isSignedIn) return
+    session
+      .refresh()
+      .then(() => {
+        const action = router.currentRoute.value.meta.action
+        if (action && session.isSignedIn && !session.can(action)) void router.push({ name: 'projects' })
+      })
+      .catch(() => undefined)
   })
 }

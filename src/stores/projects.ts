@@ -67,6 +67,10 @@ export const useProjectsStore = defineStore('projects', () => {
   }
 
   const refreshList = () => loadList()
+  /** After a change: reload the list page only if one was shown (a later visit loads it anyway). */
+  const refreshIfShown = () => {
+    if (listLoaded.value) void refreshList().catch(() => undefined)
+  }
 
   /** One project, from the server (deduped while in flight). */
   function fetchOne(id: string): Promise<Project> {
@@ -82,23 +86,23 @@ export const useProjectsStore = defineStore('projects', () => {
 
   async function create(input: ProjectInput): Promise<Project> {
     const project = remember(await projectsApi.createProject(input))
-    void refreshList().catch(() => undefined)
+    refreshIfShown()
     return project
   }
   async function update(id: string, changes: ProjectUpdate): Promise<Project> {
     const project = remember(await projectsApi.updateProject(id, changes))
-    void refreshList().catch(() => undefined)
+    refreshIfShown()
     return project
   }
   async function duplicate(id: string): Promise<Project> {
     const project = remember(await projectsApi.duplicateProject(id))
-    void refreshList().catch(() => undefined)
+    refreshIfShown()
     return project
   }
   async function remove(id: string): Promise<void> {
     await projectsApi.deleteProject(id)
     delete byId.value[id]
-    void refreshList().catch(() => undefined)
+    refreshIfShown()
   }
 
   return {
