@@ -1,0 +1,106 @@
+// The open design: its Y.Doc handle, live analysis, save state and what is selected. One design is
+// open at a time; `open` starts an effect scope for it and `close` ends it (worker, timers, doc).
+import { acceptHMRUpdate, defineStore } from 'pinia'
+import { computed, effectScope, markRaw, ref, shallowRef, type EffectScope } from 'vue'
+import type { Design } from '@shared/design/schema'
+import { useDesignDoc, type DesignDocHandle } from '@/composables/useDesignDoc'
+import { useDesignAnalysis, type DesignAnalysis } from '@/composables/useDesignAnalysis'
+import { useDesignSave } from '@/composables/useDesignSave'
+import type { AnalysisResult, Finding } from '@/components/editor/model/analysisTypes'
+import { indexAnalysis, type AnalysisIndex } from '@/components/editor/model/analysisIndex'
+
+export interface OpenDesignOptions {
+  design: Design
+  projectId: string | null
+  revision: number
+  canEdit: boolean
+  /** Off in component tests (no Worker); on in the app. */
+  analyze?: boolean
+  save?: boolean
+}
+
+export interface Selection {
+  partIds: string[]
+  conductorIds: string[]
+}
+
+type SaveApi = ReturnType<typeof useDesignSave>
+
+export const useDesignEditorStore = defineStore('designEditor', () => {
+  const handle = shallowRef<DesignDocHandle | null>(null)
+  const analysis = shallowRef<DesignAnalysis | null>(null)
+  const saver = shallowRef<SaveApi | null>(null)
+  const canEdit = ref(false)
+  const projectId = ref<string | null>(null)
+  const selection = ref<Selection>({ partIds: [], conductorIds: [] })
+  const scenarioId = ref<string | null>(null)
+  /** Bumps when something asks the canvas to centre on the selection. */
+  const focusRequest = ref(0)
+  let scope: EffectScope | null = null
+
+  function open(options: OpenDesignOptions): void {
+    close()
+    scope = effectScope(true)
+    scope.run(() => {
+      const doc = useDesignDoc(options.design)
+      handle.value = markRaw(doc)
+      if (options.analyze !== false) analysis.value = markRaw(useDesignAnalysis(doc.design, doc.electricalVersion))
+      if (options.save !== false && options.projectId) {
+        saver.value = markRaw(
+          useDesignSave({
+            projectId: options.projectId,
+            design: doc.design,
+            version: doc.version,
+            initialRevision: options.revision,
+            canEdit: options.canEdit,
+          }),
+        )
+      }
+    })
+    canEdit.value = options.canEdit
+    projectId.value = options.projectId
+    scenarioId.value = options.design.scenarios[0]?.id ?? null
+    selection.value = { partIds: [], conductorIds: [] }
+  }
+
+  function close(): void {
+    scope?.stop()
+    scope = null
+    handle.value?.dispose()
+    handle.value = null
+    analysis.value = null
+    saver.value = null
+  }
+
+  const design = computed<Design | null>(() => handle.value?.design.value ?? null)
+  const result = computed<AnalysisResult | null>(() => analysis.value?.result.value ?? null)
+  const index = computed<AnalysisIndex>(() => indexAnalysis(result.value, scenarioId.value))
+  const findings = computed<Finding[]>(() => result.value?.findings ?? [])
+  const saveState = computed(() => saver.value?.state.value ?? (canEdit.value ? 'saved' : 'read-only'))
+
+  function select(next: Partial<Selection>, options: { focus?: boolean } = {}): void {
+    selection.value = { partIds: next.partIds ?? [], conductorIds: next.conductorIds ?? [] }
+    if (options.focus) focusRequest.value++
+  }
+
+  return {
+    handle,
+    analysis,
+    saver,
+    canEdit,
+    projectId,
+    selection,
+    scenarioId,
+    focusRequest,
+    design,
+    result,
+    index,
+    findings,
+    saveState,
+    open,
+    close,
+    select,
+  }
+})
+
+if (import.meta.hot) import.meta.hot.accept(acceptHMRUpdate(useDesignEditorStore, import.meta.hot))
