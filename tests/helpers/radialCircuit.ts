@@ -59,6 +59,8 @@ export function radialCircuit(options: RadialOptions): Circuit {
 
   const feeders = Math.max(1, Math.round(Math.sqrt(loads) / 2))
   const loadNegs: number[] = []
+  const feederOfLoad: number[] = []
+  const firstLoadOfFeeder: number[] = []
   let made = 0
   for (let f = 0; f < feeders; f++) {
     const count = Math.floor(((f + 1) * loads) / feeders) - Math.floor((f * loads) / feeders)
@@ -71,6 +73,7 @@ export function radialCircuit(options: RadialOptions): Circuit {
     wire(`f${f}.neg`, subNeg, negBus, (between(0.005, 0.015) * nominalV) / feederA)
     let parentPos = subPos
     let parentNeg = subNeg
+    firstLoadOfFeeder.push(made)
     for (let k = 0; k < count; k++, made++) {
       // 40 % of loads continue a daisy chain from the previous load, the rest start at the panel.
       if (random() >= 0.4) {
@@ -89,16 +92,22 @@ export function radialCircuit(options: RadialOptions): Circuit {
       else if (kind < 0.65) elements.push({ kind: 'isource', id: `L${made}`, from: pos, to: neg, currentA: loadA })
       else elements.push({ kind: 'cpower', id: `L${made}`, pos, neg, powerW, minVoltageV: 9 })
       loadNegs.push(neg)
+      feederOfLoad.push(f)
       parentPos = pos
       parentNeg = neg
     }
   }
-  // Meshed negative returns: bonds to chassis and cross-links between load negatives.
+  // Meshed negative returns: bonds to chassis and cross-links between load negatives of one panel
+  // (loads mounted near each other share a return; long cross-links across the system are not typical).
   const meshedShare = options.meshedShare ?? 0.08
+  firstLoadOfFeeder.push(made)
   for (let k = 0; k < loadNegs.length; k++) {
     if (random() >= meshedShare) continue
+    const f = feederOfLoad[k]
+    const first = firstLoadOfFeeder[f]
+    const other = first + Math.floor(random() * (firstLoadOfFeeder[f + 1] - first))
     if (random() < 0.5) wire(`bond${k}`, loadNegs[k], chassis, between(0.005, 0.05))
-    else wire(`link${k}`, loadNegs[k], loadNegs[Math.floor(random() * loadNegs.length)], between(0.005, 0.05))
+    else wire(`link${k}`, loadNegs[k], loadNegs[other], between(0.005, 0.05))
   }
   return { nodeCount, elements }
 }

@@ -1,6 +1,6 @@
 // Elements flattened into typed arrays so the Newton loop runs without object look-ups.
 import type { CircuitElement } from '../circuit'
-import { terminalsOf } from './validateElements'
+import { firstNode, secondNode } from './validateElements'
 
 export const RESISTOR = 0
 export const VSOURCE = 1
@@ -36,10 +36,9 @@ export function buildElementTable(elements: CircuitElement[], active: Uint8Array
   for (let e = 0; e < m; e++) {
     if (!active[e]) continue
     const element = elements[e]
-    const [p, q] = terminalsOf(element)
     table.kind[e] = KIND_CODE[element.kind]
-    table.p[e] = p
-    table.q[e] = q
+    table.p[e] = firstNode(element)
+    table.q[e] = secondNode(element)
     switch (element.kind) {
       case 'resistor':
         table.value[e] = 1 / element.resistanceOhm

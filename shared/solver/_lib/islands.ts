@@ -1,5 +1,5 @@
 import type { CircuitElement, Island } from '../circuit'
-import { terminalsOf } from './validateElements'
+import { firstNode, secondNode } from './validateElements'
 
 export class UnionFind {
   readonly parent: Int32Array
@@ -39,8 +39,7 @@ export function findIslands(nodeCount: number, elements: CircuitElement[], condu
   const uf = new UnionFind(nodeCount)
   for (let e = 0; e < elements.length; e++) {
     if (!conducts[e]) continue
-    const [p, q] = terminalsOf(elements[e])
-    uf.union(p, q)
+    uf.union(firstNode(elements[e]), secondNode(elements[e]))
   }
   const islandOfRoot = new Int32Array(nodeCount).fill(-1)
   const islandOfNode = new Int32Array(nodeCount)

@@ -4,7 +4,7 @@
 import type { CircuitElement } from '../circuit'
 import { createFactor, ldlSymbolic, type LdlFactor } from './ldl'
 import { minimumDegreeOrder } from './minimumDegree'
-import { terminalsOf } from './validateElements'
+import { firstNode, secondNode } from './validateElements'
 
 export interface NodalSystem {
   /** Number of unknown node voltages. */
@@ -42,7 +42,8 @@ export function buildNodalSystem(
   const termQ = new Int32Array(m).fill(-1)
   for (let e = 0; e < m; e++) {
     if (!stamps[e]) continue
-    const [p, q] = terminalsOf(elements[e])
+    const p = firstNode(elements[e])
+    const q = secondNode(elements[e])
     // An element with both terminals on one node carries no conductance between unknowns.
     if (p === q) continue
     termP[e] = natural[p]
@@ -98,34 +99,33 @@ export function buildNodalSystem(
   const cursor = colCount.slice(0, n)
   for (let e = 0; e < m; e++) if (offCol[e] >= 0) byColumn[cursor[offCol[e]]++] = e
   const ap = new Int32Array(n + 1)
-  const rows: number[] = []
+  const rows = new Int32Array(n + colCount[n])
+  let used = 0
   const slotOfRow = new Int32Array(n)
   const rowStamp = new Int32Array(n).fill(-1)
   const slotPQ = new Int32Array(m).fill(-1)
-  const diagSlot = new Int32Array(n)
   for (let c = 0; c < n; c++) {
-    ap[c] = rows.length
-    diagSlot[c] = rows.length
-    rows.push(c)
+    ap[c] = used // the diagonal is each column's first slot
+    rows[used++] = c
     rowStamp[c] = c
     for (let k = colCount[c]; k < colCount[c + 1]; k++) {
       const e = byColumn[k]
       const r = offRow[e]
       if (rowStamp[r] !== c) {
         rowStamp[r] = c
-        slotOfRow[r] = rows.length
-        rows.push(r)
+        slotOfRow[r] = used
+        rows[used++] = r
       }
       slotPQ[e] = slotOfRow[r]
     }
   }
-  ap[n] = rows.length
-  const ai = Int32Array.from(rows)
+  ap[n] = used
+  const ai = rows.slice(0, used)
   const slotPP = new Int32Array(m).fill(-1)
   const slotQQ = new Int32Array(m).fill(-1)
   for (let e = 0; e < m; e++) {
-    if (termP[e] >= 0) slotPP[e] = diagSlot[pinv[termP[e]]]
-    if (termQ[e] >= 0) slotQQ[e] = diagSlot[pinv[termQ[e]]]
+    if (termP[e] >= 0) slotPP[e] = ap[pinv[termP[e]]]
+    if (termQ[e] >= 0) slotQQ[e] = ap[pinv[termQ[e]]]
   }
   const factor = createFactor(ldlSymbolic(n, ap, ai))
   return {

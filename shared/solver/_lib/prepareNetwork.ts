@@ -1,7 +1,7 @@
 // Validation, islands and the unknown set shared by the operating point and the fault analysis.
 import type { Circuit, CircuitElement, SolverProblem } from '../circuit'
 import { findIslands, type IslandMap } from './islands'
-import { terminalsOf, validateElements } from './validateElements'
+import { firstNode, secondNode, validateElements } from './validateElements'
 
 export interface PreparedNetwork {
   /** 1 for elements that passed validation. */
@@ -46,8 +46,7 @@ export function prepareNetwork(circuit: Circuit, include: (element: CircuitEleme
   const bridging: string[] = []
   for (let e = 0; e < elements.length; e++) {
     if (!used[e] || conducts[e]) continue
-    const [from, to] = terminalsOf(elements[e])
-    if (islandOfNode[from] !== islandOfNode[to]) {
+    if (islandOfNode[firstNode(elements[e])] !== islandOfNode[secondNode(elements[e])]) {
       used[e] = 0
       bridging.push(elements[e].id)
     }
@@ -64,7 +63,7 @@ export function prepareNetwork(circuit: Circuit, include: (element: CircuitEleme
   const floatingIds = new Map<number, string[]>()
   for (let e = 0; e < elements.length; e++) {
     if (!used[e]) continue
-    const island = islandOfNode[terminalsOf(elements[e])[0]]
+    const island = islandOfNode[firstNode(elements[e])]
     if (islands[island].hasSource) active[e] = 1
     else {
       const ids = floatingIds.get(island) ?? []

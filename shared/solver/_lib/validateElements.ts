@@ -1,15 +1,13 @@
 import type { Circuit, CircuitElement, SolverProblem } from '../circuit'
 
-/** Node numbers of an element's two terminals, in its own order (a/b, pos/neg, from/to). */
-export function terminalsOf(element: CircuitElement): [number, number] {
-  switch (element.kind) {
-    case 'resistor':
-      return [element.a, element.b]
-    case 'isource':
-      return [element.from, element.to]
-    default:
-      return [element.pos, element.neg]
-  }
+/** An element's first terminal in its own order: a, pos or from. (No tuple: these run per element per call.) */
+export function firstNode(element: CircuitElement): number {
+  return element.kind === 'resistor' ? element.a : element.kind === 'isource' ? element.from : element.pos
+}
+
+/** An element's second terminal: b, neg or to. */
+export function secondNode(element: CircuitElement): number {
+  return element.kind === 'resistor' ? element.b : element.kind === 'isource' ? element.to : element.neg
 }
 
 function isNode(node: unknown, nodeCount: number): boolean {
@@ -17,8 +15,7 @@ function isNode(node: unknown, nodeCount: number): boolean {
 }
 
 function elementError(element: CircuitElement, nodeCount: number): string | null {
-  const [p, q] = terminalsOf(element)
-  if (!isNode(p, nodeCount) || !isNode(q, nodeCount)) return `terminal node out of range 0..${nodeCount - 1}`
+  if (!isNode(firstNode(element), nodeCount) || !isNode(secondNode(element), nodeCount)) return `terminal node out of range 0..${nodeCount - 1}`
   switch (element.kind) {
     case 'resistor':
       return Number.isFinite(element.resistanceOhm) && element.resistanceOhm > 0
