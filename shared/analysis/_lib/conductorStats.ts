@@ -1,0 +1,103 @@
+import { conductorAmpacityA, type AmpacityResult } from '../../conductors/ampacity'
+import type { Conductor, Design, PartOf } from '../../design/schema'
+import type { ConductorProtection, ProtectionTopology } from '../protectionTopology'
+import type { ProtectiveDevice } from './devices'
+import { BRANCH_DISTANCE_LIMITS, maxDeviceRating } from './ocpdLimit'
+import type { ConductorStats, PvGroup } from '../rules/types'
+import type { ScenarioSolve } from './solveScenario'
+import { conductorOhm, conductorTemperatureC } from './conductorFigures'
+import { finite } from './finite'
+
+/** Ampacity of a conductor under the design's profile; null (with the reason) when the tables refuse it. */
+export function ampacityOf(c: Conductor, design: Design, circuitVoltageV: number): { result: AmpacityResult | null; source: string } {
+  try {
+    const result = conductorAmpacityA({
+      sizeId: c.sizeId, material: c.material, insulationRatingC: c.insulationRatingC,
+      ambientC: conductorTemperatureC(c, design.settings), installation: c.installation,
+      bundledCount: c.bundledCount, profile: design.settings.profile, circuitVoltageV,
+    })
+    const factors = result.factors.map((f) => `${f.name} × ${f.value.toFixed(2)}`).join('; ')
+    const source = result.ampacityA === null ? `${result.table}: ${result.unavailableReason ?? 'no value'}` : factors ? `${result.table}; ${factors}` : result.table
+    return { result, source }
+  } catch (e) {
+    return { result: null, source: `no ampacity: ${e instanceof Error ? e.message : 'input refused'}` }
+  }
+}
+
+/** Worst case per conductor over the solved scenarios, with ampacity, protection and PV role. */
+export function conductorStats(
+  design: Design, solves: ScenarioSolve[], topology: ProtectionTopology, farEndA: Map<string, number>, pvGroups: PvGroup[],
+  devices: ProtectiveDevice[],
+): ConductorStats[] {
+  const deviceById = new Map(devices.map((d) => [d.id, d]))
+  const nominalV = design.settings.nominalVoltageV
+  const groupOfArray = new Map<string, PvGroup>()
+  for (const g of pvGroups) for (const a of g.arrays) groupOfArray.set(a.id, g)
+  const arrayById = new Map(pvGroups.flatMap((g) => g.arrays.map((a) => [a.id, a] as const)))
+  const controllerGroup = new Map(pvGroups.map((g) => [g.controller.id, g]))
+
+  return design.conductors.map((c, i) => {
+    let maxCurrentA = 0
+    let maxScenarioId: string | null = null
+    let steadyCurrentA = 0
+    let steadyScenarioId: string | null = null
+    let dropPercentMax = 0
+    for (const s of solves) {
+      const amps = Math.abs(s.conductorCurrentA[i])
+      if (amps > maxCurrentA) { maxCurrentA = amps; maxScenarioId = s.scenario.id }
+      if (!s.scenario.motorStart && amps > steadyCurrentA) { steadyCurrentA = amps; steadyScenarioId = s.scenario.id }
+      dropPercentMax = Math.max(dropPercentMax, s.result.conductors[i]?.dropPercent ?? 0)
+    }
+    const tapped = topology.conductors.get(c.id)!
+    const pv = pvRole(c, tapped.side === 'pv' ? tapped.sourcePartId : null, arrayById, groupOfArray, controllerGroup)
+    const circuitVoltageV = pv ? Math.max(nominalV, ...pv.arrays.map((a) => a.params.moduleVocV * a.params.modulesPerString)) : nominalV
+    const { result, source } = ampacityOf(c, design, circuitVoltageV)
+    const protection = branchProtection(c, tapped, result?.ampacityA ?? null, design, deviceById)
+    return {
+      conductor: c, maxCurrentA: finite(maxCurrentA), maxScenarioId, steadyCurrentA: finite(steadyCurrentA), steadyScenarioId, ampacity: result,
+      ampacityA: result?.ampacityA ?? null, ampacitySource: source, ambientC: conductorTemperatureC(c, design.settings),
+      resistanceOhm: conductorOhm(c, design.settings) ?? 0, dropPercentMax: finite(dropPercentMax), protection,
+      faultFarEndA: pv ? finite(pv.arrays.reduce((s, a) => s + a.params.moduleIscA * a.params.strings, 0)) : (farEndA.get(c.id) ?? 0),
+      pv,
+    }
+  })
+}
+
+/**
+ * PV circuit conductors: positive ones fed only by arrays, and those on an array's or a controller's
+ * PV negative. A conductor on an array's own terminal carries that array's strings; one further
+ * along carries every string of the controller's input.
+ */
+function pvRole(
+  c: Conductor, feedingArrayId: string | null, arrayById: Map<string, PartOf<'pv-array'>>,
+  groupOfArray: Map<string, PvGroup>, controllerGroup: Map<string, PvGroup>,
+): ConductorStats['pv'] {
+  for (const end of [c.from, c.to]) {
+    const own = arrayById.get(end.partId)
+    if (own) return { arrays: [own], strings: own.params.strings }
+  }
+  const group =
+    (feedingArrayId ? groupOfArray.get(feedingArrayId) : undefined) ??
+    [c.from, c.to].map((end) => (end.terminal === 'pv-neg' || end.terminal === 'pv-pos' ? controllerGroup.get(end.partId) : undefined)).find(Boolean)
+  if (!group) return null
+  return { arrays: group.arrays, strings: group.arrays.reduce((s, a) => s + a.params.strings, 0) }
+}
+
+/**
+ * A conductor tapped off a bus whose upstream device is too big for it is still protected when its
+ * own device sits within the branch distance of the bus and is small enough: then that device is
+ * the one at its source end.
+ */
+function branchProtection(
+  c: Conductor, p: ConductorProtection, ampacityA: number | null, design: Design, deviceById: Map<string, ProtectiveDevice>,
+): ConductorProtection {
+  if (p.protectedFrom !== 'upstream' || ampacityA === null || !p.protectingDeviceId || !p.downstreamDeviceId || p.downstreamRunM === null) return p
+  const upstream = deviceById.get(p.protectingDeviceId)
+  const own = deviceById.get(p.downstreamDeviceId)
+  if (!upstream || !own) return p
+  const allowed = (family: string) => maxDeviceRating(c, ampacityA, design.settings.profile, family)?.maxRatingA ?? 0
+  if (upstream.ratingA <= allowed(upstream.family) + 1e-9) return p
+  const limitM = c.sheathed ? BRANCH_DISTANCE_LIMITS.sheathedM : BRANCH_DISTANCE_LIMITS.bareM
+  if (p.downstreamRunM > limitM + 1e-9 || own.ratingA > allowed(own.family) + 1e-9) return p
+  return { ...p, protectingDeviceId: own.id, protectedFrom: 'branch', deviceDistanceM: p.downstreamRunM, runSheathed: c.sheathed }
+}

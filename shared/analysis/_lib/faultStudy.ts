@@ -1,0 +1,52 @@
+import type { Design } from '../../design/schema'
+import { faultCurrents, type FaultLocation } from '../../solver/theveninResistance'
+import { compileCircuit, FAULT_STUDY_SCENARIO, type PreparedDesign } from '../compileCircuit'
+import type { ProtectionTopology } from '../protectionTopology'
+import { finite } from './finite'
+import { terminalKey } from './terminalNodes'
+
+export interface FaultStudy {
+  /** Bolted fault at the device's load terminal to the negative of its bank, A. */
+  deviceFaultA: Map<string, number>
+  /** Bolted fault at the far end of each positive conductor, across the part it feeds (its negative
+   * terminal when it has one, else the bank's negative), A. */
+  conductorFarEndA: Map<string, number>
+}
+
+/**
+ * Prospective short-circuit currents from the batteries alone (loads and chargers off), through
+ * each bank's internal resistance and the wiring (standards.md §7: Isc ≈ E / (R_int + R_ext)).
+ * The device figure ignores the return path (highest current: the interrupting-rating case); the
+ * far-end figure includes it (the current the upstream device must see to clear).
+ */
+export function faultStudy(design: Design, prepared: PreparedDesign, topology: ProtectionTopology): FaultStudy {
+  const compiled = compileCircuit(design, FAULT_STUDY_SCENARIO, prepared)
+  const { nodeOf, terminalsOf } = prepared.nodes
+  const bankNeg = new Map<string, number>()
+  for (const el of compiled.circuit.elements) if (el.kind === 'vsource') bankNeg.set(el.id.slice(2), el.neg)
+
+  const faults: FaultLocation[] = []
+  for (const d of prepared.devices) {
+    const t = topology.devices.get(d.id)
+    const a = nodeOf.get(terminalKey(d.partId, d.loadTerminal))
+    const b = t?.side === 'battery' && t.sourcePartId ? bankNeg.get(t.sourcePartId) : undefined
+    if (a !== undefined && b !== undefined) faults.push({ id: `d:${d.id}`, a, b })
+  }
+  for (const c of design.conductors) {
+    const t = topology.conductors.get(c.id)
+    if (!t || t.side !== 'battery' || !t.sourcePartId) continue
+    const far = [c.from, c.to].find((ref) => nodeOf.get(terminalKey(ref.partId, ref.terminal)) === t.downstreamNode)
+    const negTerminal = far ? terminalsOf.get(far.partId)?.find((term) => term.polarity === 'negative') : undefined
+    const b = (negTerminal && far ? nodeOf.get(terminalKey(far.partId, negTerminal.id)) : undefined) ?? bankNeg.get(t.sourcePartId)
+    if (b !== undefined) faults.push({ id: `c:${c.id}`, a: t.downstreamNode, b })
+  }
+
+  const deviceFaultA = new Map<string, number>()
+  const conductorFarEndA = new Map<string, number>()
+  for (const f of faultCurrents(compiled.circuit, faults)) {
+    const amps = finite(f.currentA)
+    if (f.id.startsWith('d:')) deviceFaultA.set(f.id.slice(2), amps)
+    else conductorFarEndA.set(f.id.slice(2), amps)
+  }
+  return { deviceFaultA, conductorFarEndA }
+}

@@ -1,0 +1,23 @@
+import { maxOcpdA, type MaxOcpdResult } from '../../conductors/maxOcpd'
+import type { Conductor, Design } from '../../design/schema'
+import { DEVICE_FAMILY_IDS, type DeviceFamilyId } from '../../protection/ratings'
+
+export function familyId(family: string): DeviceFamilyId | undefined {
+  return (DEVICE_FAMILY_IDS as readonly string[]).includes(family) ? (family as DeviceFamilyId) : undefined
+}
+
+/** Largest device a conductor may have under the design's profile; null when the tables refuse the input. */
+export function maxDeviceRating(c: Conductor, ampacityA: number, profile: Design['settings']['profile'], family: string): MaxOcpdResult | null {
+  try {
+    return maxOcpdA({ sizeId: c.sizeId, material: c.material, ampacityA: Math.max(0, ampacityA), profile, family: familyId(family) })
+  } catch {
+    return null
+  }
+}
+
+/**
+ * Where a branch device may sit from the bus or panel it is tapped from (m): ABYC E-11 §11.10, 7 in
+ * (175 mm), or 40 in (1.02 m) for conductors from sources other than the battery when sheathed
+ * (standards.md §4, pkys.com summary). Vehicles and buildings: the same figures, common practice.
+ */
+export const BRANCH_DISTANCE_LIMITS = { bareM: 0.178, sheathedM: 1.02, source: 'ABYC E-11 §11.10: within 7 in of the bus, or 40 in (1.02 m) if sheathed (standards.md §4)' } as const

@@ -1,0 +1,101 @@
+import type { Design, Scenario } from '../../design/schema'
+import { solveOperatingPoint } from '../../solver/solveOperatingPoint'
+import type { OperatingPoint } from '../../solver/circuit'
+import { compileCircuit, type CompiledCircuit, type PreparedDesign } from '../compileCircuit'
+import type { Finding, ScenarioResult } from '../types'
+import { finite } from './finite'
+import { compileProblemFindings, solverProblemFindings } from './solverFindings'
+
+export interface ScenarioSolve {
+  scenario: Scenario
+  compiled: CompiledCircuit
+  op: OperatingPoint
+  result: ScenarioResult
+  /** Per conductor (design order): current, A (from → to) */
+  conductorCurrentA: Float64Array
+  /** Per device id: |current|, A */
+  deviceCurrentA: Map<string, number>
+  /** Per part id: the current of its own element (0 when it has none) */
+  partCurrentA: Map<string, number>
+  /** Voltage between the two terminals of a part: V(a) − V(b) */
+  voltageAcross: (partId: string, a: string, b: string) => number | null
+  findings: Finding[]
+}
+
+const TWO_TERMINALS: Record<string, [string, string]> = {
+  battery: ['pos', 'neg'], load: ['pos', 'neg'], inverter: ['pos', 'neg'], 'pv-array': ['pos', 'neg'],
+  'mains-charger': ['bat-pos', 'bat-neg'], 'charge-controller': ['bat-pos', 'bat-neg'], 'dc-dc-charger': ['out-pos', 'out-neg'],
+  fuse: ['line', 'load'], breaker: ['line', 'load'], 'battery-switch': ['a', 'b'], shunt: ['battery', 'system'],
+  'fuse-panel': ['in-pos', 'in-neg'],
+}
+
+/** Compile, solve and read back one scenario. Never throws for a parsed design. */
+export function solveScenario(design: Design, scenario: Scenario, prepared: PreparedDesign): ScenarioSolve {
+  const compiled = compileCircuit(design, scenario, prepared)
+  const op = solveOperatingPoint(compiled.circuit)
+  const v = op.nodeVoltageV
+  const nodeV = (n: number | undefined) => (n === undefined || n >= v.length ? null : finite(v[n]))
+  const nominalV = design.settings.nominalVoltageV
+
+  // Report terminal voltages against the negative of a bank in the same island.
+  const islandOf = new Int32Array(compiled.circuit.nodeCount).fill(-1)
+  op.islands.forEach((island, k) => { for (const n of island.nodes) islandOf[n] = k })
+  const refV = new Float64Array(op.islands.length)
+  const refSet = new Uint8Array(op.islands.length)
+  for (const neg of compiled.batteryNegNodes) {
+    const k = islandOf[neg]
+    if (k >= 0 && !refSet[k]) { refV[k] = finite(v[neg] ?? 0); refSet[k] = 1 }
+  }
+  const terminals: Record<string, number> = {}
+  for (const [key, n] of compiled.nodes.nodeOf) {
+    const k = islandOf[n]
+    terminals[key] = finite((v[n] ?? 0) - (k >= 0 ? refV[k] : 0))
+  }
+
+  const conductorCurrentA = new Float64Array(design.conductors.length)
+  const conductors = design.conductors.map((c, i) => {
+    const e = compiled.conductorElement.get(c.id)
+    if (e === undefined) return { id: c.id, currentA: 0, dropV: 0, dropPercent: 0, fromV: 0, toV: 0 }
+    const el = compiled.circuit.elements[e]
+    const currentA = finite(op.elementCurrentA[e])
+    conductorCurrentA[i] = currentA
+    const dropV = el.kind === 'resistor' ? Math.abs(currentA) * el.resistanceOhm : 0
+    return {
+      id: c.id, currentA, dropV: finite(dropV), dropPercent: finite((100 * dropV) / nominalV),
+      fromV: terminals[`${c.from.partId}:${c.from.terminal}`] ?? 0, toV: terminals[`${c.to.partId}:${c.to.terminal}`] ?? 0,
+    }
+  })
+
+  const deviceCurrentA = new Map<string, number>()
+  for (const [id, e] of compiled.deviceElement) deviceCurrentA.set(id, Math.abs(finite(op.elementCurrentA[e])))
+  const partCurrentA = new Map<string, number>()
+  const voltageAcross = (partId: string, a: string, b: string) => {
+    const va = nodeV(compiled.nodes.nodeOf.get(`${partId}:${a}`))
+    const vb = nodeV(compiled.nodes.nodeOf.get(`${partId}:${b}`))
+    return va === null || vb === null ? null : va - vb
+  }
+  const panelCurrent = new Map<string, number>()
+  for (const [id, current] of deviceCurrentA) {
+    const hash = id.indexOf('#')
+    if (hash > 0) panelCurrent.set(id.slice(0, hash), (panelCurrent.get(id.slice(0, hash)) ?? 0) + current)
+  }
+  const parts = design.parts.map((part) => {
+    const e = compiled.partElement.get(part.id)
+    const currentA = e !== undefined ? finite(op.elementCurrentA[e]) : (panelCurrent.get(part.id) ?? 0)
+    partCurrentA.set(part.id, currentA)
+    const pair = TWO_TERMINALS[part.type]
+    const voltageV = pair ? (voltageAcross(part.id, pair[0], pair[1]) ?? 0) : 0
+    return { id: part.id, currentA, powerW: e !== undefined ? finite(op.elementPowerW[e]) : 0, voltageV }
+  })
+
+  const findings = [
+    ...solverProblemFindings(op.problems, scenario.id, scenario.name),
+    ...compileProblemFindings(compiled.problems, scenario.id),
+  ]
+  const broken = op.problems.some((p) => p.kind === 'shorted-source' || p.kind === 'source-loop' || p.kind === 'invalid-element')
+  const status: ScenarioResult['status'] = op.status !== 'ok' ? 'not-converged' : broken ? 'failed' : 'ok'
+  return {
+    scenario, compiled, op, conductorCurrentA, deviceCurrentA, partCurrentA, voltageAcross, findings,
+    result: { id: scenario.id, name: scenario.name, status, conductors, parts, terminals },
+  }
+}

@@ -1,0 +1,147 @@
+import type { Conductor, Design, PartOf } from '../design/schema'
+import { pvArraysByController, type PreparedDesign } from './compileCircuit'
+import { conductorStats } from './_lib/conductorStats'
+import { deviceStats } from './_lib/deviceStats'
+import { protectiveDevices } from './_lib/devices'
+import { faultStudy } from './_lib/faultStudy'
+import { finite } from './_lib/finite'
+import { loadDrops } from './_lib/loadDrops'
+import { solveScenario, type ScenarioSolve } from './_lib/solveScenario'
+import { buildTerminalNodes } from './_lib/terminalNodes'
+import { UnionFind } from './_lib/unionFind'
+import { makeFinding, mergeFindings } from './findings'
+import { protectionTopology } from './protectionTopology'
+import { RULES } from './rules'
+import type { PvGroup, RuleContext } from './rules/types'
+import type { AnalysisResult, Finding } from './types'
+
+export interface AnalyzeOptions {
+  /** Only these scenarios (default: all). Unknown ids give a warning finding. */
+  scenarioIds?: string[]
+}
+
+/**
+ * Solves every scenario of a design, computes fault currents and runs every rule: one findings list,
+ * worst case over the scenarios. Never throws and never returns NaN: a circuit that cannot be
+ * solved gives findings naming its parts.
+ * @example
+ * const { findings } = analyzeDesign(createDemoDesign())
+ * findings.filter((f) => f.severity === 'error').map((f) => f.title)
+ */
+export function analyzeDesign(design: Design, options: AnalyzeOptions = {}): AnalysisResult {
+  try {
+    return analyze(design, options)
+  } catch (error) {
+    // A defect of ours, not of the design: say so plainly instead of crashing the editor or the API.
+    const message = error instanceof Error ? error.message : String(error)
+    return {
+      scenarios: [], conductors: [], devices: [],
+      findings: [makeFinding({ ruleId: 'analysis-failed', severity: 'error', title: 'Analysis could not finish', partIds: [], conductorIds: [],
+        source: 'Ampwright analysis', message: `The analysis stopped on an internal error (${message}). The design was not checked; please report it.` })],
+    }
+  }
+}
+
+function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
+  const nodes = buildTerminalNodes(design)
+  const devices = protectiveDevices(design)
+  const prepared: PreparedDesign = { nodes, devices }
+  const topology = protectionTopology(design, nodes, devices)
+  const findings: Finding[] = []
+
+  const wanted = options.scenarioIds ? new Set(options.scenarioIds) : null
+  const scenarios = wanted ? design.scenarios.filter((s) => wanted.has(s.id)) : design.scenarios
+  for (const id of wanted ?? []) {
+    if (!design.scenarios.some((s) => s.id === id))
+      findings.push(makeFinding({ ruleId: 'unknown-scenario', severity: 'warning', title: 'Unknown scenario', partIds: [], conductorIds: [],
+        source: 'Ampwright analysis', message: `No scenario has the id "${id}"; it was skipped.` }))
+  }
+  const solves: ScenarioSolve[] = scenarios.map((s) => solveScenario(design, s, prepared))
+  for (const s of solves) findings.push(...s.findings)
+
+  const conductorsAt = new Map<string, Conductor[]>()
+  for (const c of design.conductors) {
+    for (const partId of new Set([c.from.partId, c.to.partId])) {
+      const list = conductorsAt.get(partId) ?? []
+      list.push(c)
+      conductorsAt.set(partId, list)
+    }
+  }
+  const pvGroups = buildPvGroups(design, prepared)
+  const faults = faultStudy(design, prepared, topology)
+  const conductors = conductorStats(design, solves, topology, faults.conductorFarEndA, pvGroups, devices)
+  const deviceList = deviceStats(design, devices, solves, topology, faults.deviceFaultA, pvGroups, conductorsAt, conductors)
+  const ctx: RuleContext = {
+    design, profile: design.settings.profile, nominalV: design.settings.nominalVoltageV,
+    conductors, conductorById: new Map(conductors.map((c) => [c.conductor.id, c])),
+    devices: deviceList, deviceById: new Map(deviceList.map((d) => [d.device.id, d])),
+    partById: new Map(design.parts.map((p) => [p.id, p])), conductorsAtPart: conductorsAt,
+    loadDrops: loadDrops(design, solves, topology, conductorsAt), pvGroups, nodes, topology,
+    partMaxCurrent: partMaxCurrents(design, solves),
+  }
+  for (const rule of RULES) {
+    try {
+      findings.push(...rule.run(ctx))
+    } catch (error) {
+      findings.push(makeFinding({ ruleId: `${rule.id}-failed`, severity: 'warning', title: `Check not run: ${rule.title}`, partIds: [], conductorIds: [],
+        source: rule.source, message: `This check stopped on an internal error (${error instanceof Error ? error.message : String(error)}); its result is missing.` }))
+    }
+  }
+
+  return {
+    scenarios: solves.map((s) => s.result),
+    conductors: conductors.map((c) => ({
+      id: c.conductor.id, maxCurrentA: finite(c.maxCurrentA), ampacityA: finite(c.ampacityA ?? 0), ampacitySource: c.ampacitySource,
+      resistanceOhm: finite(c.resistanceOhm), dropPercentMax: finite(c.dropPercentMax),
+      protectingDeviceId: c.protection.protectingDeviceId, faultCurrentFarEndA: finite(c.faultFarEndA),
+    })),
+    devices: deviceList.map((d) => ({
+      id: d.device.id, partId: d.device.partId, ratingA: d.device.ratingA, maxCurrentA: finite(d.maxCurrentA),
+      faultCurrentA: finite(d.faultCurrentA), protectsConductorIds: d.protectsConductorIds,
+    })),
+    findings: mergeFindings(findings),
+  }
+}
+
+/** Each charge controller with the arrays wired to its PV input. */
+function buildPvGroups(design: Design, prepared: PreparedDesign): PvGroup[] {
+  const { nodes, devices } = prepared
+  const series = new UnionFind(nodes.nodeCount)
+  const node = (partId: string, terminal: string) => nodes.nodeOf.get(`${partId}:${terminal}`)
+  for (const c of design.conductors) {
+    const a = node(c.from.partId, c.from.terminal)
+    const b = node(c.to.partId, c.to.terminal)
+    if (a !== undefined && b !== undefined) series.union(a, b)
+  }
+  for (const d of devices) {
+    const a = node(d.partId, d.lineTerminal)
+    const b = node(d.partId, d.loadTerminal)
+    if (a !== undefined && b !== undefined) series.union(a, b)
+  }
+  const byController = pvArraysByController(design, nodes, series)
+  return design.parts
+    .filter((p): p is PartOf<'charge-controller'> => p.type === 'charge-controller')
+    .map((controller) => ({ controller, arrays: byController.get(controller.id) ?? [] }))
+    .filter((g) => g.arrays.length > 0)
+}
+
+/** Highest |current| per part over the scenarios; a bus bar's is the total fed into it. */
+function partMaxCurrents(design: Design, solves: ScenarioSolve[]): Map<string, { currentA: number; scenarioId: string }> {
+  const result = new Map<string, { currentA: number; scenarioId: string }>()
+  const note = (id: string, currentA: number, scenarioId: string) => {
+    const seen = result.get(id)
+    if (currentA > 0 && (!seen || currentA > seen.currentA)) result.set(id, { currentA: finite(currentA), scenarioId })
+  }
+  const busIds = new Set(design.parts.filter((p) => p.type === 'bus-bar').map((p) => p.id))
+  for (const s of solves) {
+    for (const [id, amps] of s.partCurrentA) note(id, Math.abs(amps), s.scenario.id)
+    const inflow = new Map<string, number>()
+    design.conductors.forEach((c, i) => {
+      const amps = s.conductorCurrentA[i] // from → to
+      if (busIds.has(c.to.partId) && amps > 0) inflow.set(c.to.partId, (inflow.get(c.to.partId) ?? 0) + amps)
+      if (busIds.has(c.from.partId) && amps < 0) inflow.set(c.from.partId, (inflow.get(c.from.partId) ?? 0) - amps)
+    })
+    for (const [id, amps] of inflow) note(id, amps, s.scenario.id)
+  }
+  return result
+}

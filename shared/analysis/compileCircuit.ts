@@ -1,0 +1,256 @@
+
+import type { Design, Part, PartOf, Scenario } from '../design/schema'
+import type { Circuit, CircuitElement } from '../solver/circuit'
+import { conductorOhm } from './_lib/conductorFigures'
+import { protectiveDevices, type ProtectiveDevice } from './_lib/devices'
+import { finite } from './_lib/finite'
+import { batteryThevenin } from './_lib/sourceModels'
+import { buildTerminalNodes, terminalKey, type TerminalNodes } from './_lib/terminalNodes'
+import { UnionFind } from './_lib/unionFind'
+
+/** Who an element stands for: a part (and which of its elements) or a conductor. */
+export interface ElementOwner {
+  kind: 'part' | 'conductor'
+  id: string
+  /** 'main', 'way3' (fuse-panel way), 'pv-input' (controller), 'input' (DC-DC charger) */
+  role: string
+}
+
+export interface CompileProblem {
+  kind: 'bad-conductor' | 'no-supply' | 'array-without-controller'
+  message: string
+  partIds: string[]
+  conductorIds: string[]
+}
+
+export interface CompiledCircuit {
+  circuit: Circuit
+  nodes: TerminalNodes
+  /** Per element, who it stands for (same order as circuit.elements). */
+  owners: ElementOwner[]
+  conductorElement: Map<string, number>
+  /** The element that carries a part's own current (battery source, load, device, converter output). */
+  partElement: Map<string, number>
+  /** Protective device id → its resistor (closed devices only). */
+  deviceElement: Map<string, number>
+  /** Negative terminal node of every battery, in part order. */
+  batteryNegNodes: number[]
+  problems: CompileProblem[]
+}
+
+/** Scenario-independent pieces, computed once per analysis and shared by every scenario's compile. */
+export interface PreparedDesign {
+  nodes: TerminalNodes
+  devices: ProtectiveDevice[]
+}
+
+/** A scenario with nothing running and no charging: the circuit of batteries and wiring only. */
+export const FAULT_STUDY_SCENARIO: Scenario = { id: '__fault__', name: 'Fault study', sunOn: false, chargerOn: false, loads: {} }
+
+/**
+ * Turns a design and one scenario into the solver's circuit (nodes and four element kinds).
+ * - Every terminal is a node; bus studs, a panel's negatives and converters' common negatives are one node.
+ * - Conductors, closed fuses/breakers/switches/panel ways and shunts are resistors; open ones are absent.
+ * - A battery is a Thevenin source; loads are constant power, current or resistance at their scenario level.
+ * - Sun on: a PV array is a current source of Imp × strings and its controller input the resistance that
+ *   holds the array at Vmp (V/I), so the PV conductors carry the array current; the controller output
+ *   delivers min(P·η, rated current × nominal V) as negative constant power into its battery side.
+ * - Chargers deliver their rated current (a bulk-stage current source); a DC-DC charger draws the
+ *   matching power ÷ η from its input.
+ * - Active elements whose terminals cannot reach a battery are left out (reported as 'no-supply'),
+ *   so a disconnected corner never makes the whole solve singular.
+ * Never throws for a design that passed parseDesign.
+ * @example const { circuit } = compileCircuit(design, design.scenarios[0])
+ */
+export function compileCircuit(design: Design, scenario: Scenario, prepared?: PreparedDesign): CompiledCircuit {
+  const nodes = prepared?.nodes ?? buildTerminalNodes(design)
+  const devices = prepared?.devices ?? protectiveDevices(design)
+  const nominalV = design.settings.nominalVoltageV
+  const minVoltageV = 0.5 * nominalV // constant-power loads turn resistive below half voltage (ZIP-load practice)
+  const elements: CircuitElement[] = []
+  const owners: ElementOwner[] = []
+  const conductorElement = new Map<string, number>()
+  const partElement = new Map<string, number>()
+  const problems: CompileProblem[] = []
+  const batteryNegNodes: number[] = []
+  const node = (partId: string, terminal: string) => nodes.nodeOf.get(terminalKey(partId, terminal))
+  const add = (el: CircuitElement, owner: ElementOwner) => {
+    elements.push(el)
+    owners.push(owner)
+    return elements.length - 1
+  }
+
+  // Series paths (conductors and closed devices): the positive-path groups find PV arrays' controllers.
+  const series = new UnionFind(nodes.nodeCount)
+  for (const c of design.conductors) {
+    const a = node(c.from.partId, c.from.terminal)
+    const b = node(c.to.partId, c.to.terminal)
+    const r = conductorOhm(c, design.settings)
+    if (a === undefined || b === undefined || r === null) {
+      problems.push({ kind: 'bad-conductor', message: `Conductor ${c.label || c.id} has an unknown terminal or an unusable size/length`, partIds: [], conductorIds: [c.id] })
+      continue
+    }
+    conductorElement.set(c.id, add({ kind: 'resistor', id: `c:${c.id}`, a, b, resistanceOhm: r }, { kind: 'conductor', id: c.id, role: 'main' }))
+    series.union(a, b)
+  }
+  const deviceElement = new Map<string, number>()
+  for (const d of devices) {
+    const a = node(d.partId, d.lineTerminal)
+    const b = node(d.partId, d.loadTerminal)
+    if (!d.closed || a === undefined || b === undefined) continue
+    const role = d.kind === 'panel-way' ? d.id.slice(d.partId.length + 1) : 'main'
+    const i = add({ kind: 'resistor', id: `p:${d.id}`, a, b, resistanceOhm: Math.max(d.resistanceOhm, 1e-6) }, { kind: 'part', id: d.partId, role })
+    if (role === 'main') partElement.set(d.partId, i)
+    deviceElement.set(d.id, i)
+    series.union(a, b)
+  }
+  for (const part of design.parts) {
+    if (part.type === 'battery-switch' && part.params.closed) addSeries(part, 'a', 'b', part.params.resistanceOhm)
+    if (part.type === 'shunt') addSeries(part, 'battery', 'system', part.params.resistanceOhm)
+  }
+  function addSeries(part: Part, ta: string, tb: string, ohm: number) {
+    const a = node(part.id, ta)
+    const b = node(part.id, tb)
+    if (a === undefined || b === undefined) return
+    partElement.set(part.id, add({ kind: 'resistor', id: `p:${part.id}`, a, b, resistanceOhm: Math.max(ohm, 1e-6) }, { kind: 'part', id: part.id, role: 'main' }))
+    series.union(a, b)
+  }
+
+  // Batteries, and which nodes a battery can reach (its two terminals joined through the bank).
+  const supplied = new UnionFind(nodes.nodeCount)
+  for (const el of elements) if (el.kind === 'resistor') supplied.union(el.a, el.b)
+  const hasBattery = new Uint8Array(nodes.nodeCount)
+  for (const part of design.parts) {
+    if (part.type !== 'battery') continue
+    const pos = node(part.id, 'pos')
+    const neg = node(part.id, 'neg')
+    if (pos === undefined || neg === undefined) continue
+    const { emfV, resistanceOhm } = batteryThevenin(part.params)
+    partElement.set(part.id, add({ kind: 'vsource', id: `p:${part.id}`, pos, neg, voltageV: emfV, resistanceOhm }, { kind: 'part', id: part.id, role: 'main' }))
+    supplied.union(pos, neg)
+    batteryNegNodes.push(neg)
+  }
+  for (const n of batteryNegNodes) hasBattery[supplied.find(n)] = 1
+  const canSupply = (...ns: (number | undefined)[]) => ns.every((n) => n !== undefined && hasBattery[supplied.find(n)] === 1)
+  const noSupply = (part: Part) =>
+    problems.push({ kind: 'no-supply', message: `${part.label || part.id} is on in this scenario but no battery can supply it`, partIds: [part.id], conductorIds: [] })
+
+  const loadSetting = (id: string) => {
+    const s = scenario.loads[id]
+    return s && s.on && s.level > 0 ? s.level : 0
+  }
+  const arraysOfController = pvArraysByController(design, nodes, series)
+
+  for (const part of design.parts) {
+    const main = { kind: 'part' as const, id: part.id, role: 'main' }
+    switch (part.type) {
+      case 'load': {
+        const level = loadSetting(part.id)
+        if (level === 0) break
+        const pos = node(part.id, 'pos')
+        const neg = node(part.id, 'neg')
+        if (!canSupply(pos, neg)) { noSupply(part); break }
+        const p = part.params
+        const inrush = scenario.motorStart && p.start ? p.start.inrushMultiple : 1
+        const el: CircuitElement =
+          p.model === 'current'
+            ? { kind: 'isource', id: `p:${part.id}`, from: pos!, to: neg!, currentA: finite((p.currentA ?? 0) * level * inrush) }
+            : p.model === 'resistance'
+              ? { kind: 'resistor', id: `p:${part.id}`, a: pos!, b: neg!, resistanceOhm: finite((p.resistanceOhm ?? 1e6) / level / inrush, 1e6) }
+              : { kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite((p.powerW ?? 0) * level * inrush), minVoltageV }
+        partElement.set(part.id, add(el, main))
+        break
+      }
+      case 'inverter': {
+        const level = loadSetting(part.id)
+        if (level === 0) break
+        const pos = node(part.id, 'pos')
+        const neg = node(part.id, 'neg')
+        if (!canSupply(pos, neg)) { noSupply(part); break }
+        const acW = scenario.motorStart ? part.params.surgeW : part.params.continuousW * level
+        partElement.set(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite(acW / part.params.efficiency), minVoltageV }, main))
+        break
+      }
+      case 'mains-charger': {
+        if (!(scenario.chargerOn || loadSetting(part.id) > 0)) break
+        const pos = node(part.id, 'bat-pos')
+        const neg = node(part.id, 'bat-neg')
+        if (!canSupply(pos, neg)) { noSupply(part); break }
+        partElement.set(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: neg!, to: pos!, currentA: part.params.outputCurrentA }, main))
+        break
+      }
+      case 'dc-dc-charger': {
+        const level = loadSetting(part.id) || (scenario.chargerOn ? 1 : 0)
+        if (level === 0) break
+        const ns = ['in-pos', 'in-neg', 'out-pos', 'out-neg'].map((t) => node(part.id, t))
+        if (!canSupply(...ns)) { noSupply(part); break }
+        const outA = part.params.outputCurrentA * level
+        add({ kind: 'cpower', id: `p:${part.id}#in`, pos: ns[0]!, neg: ns[1]!, powerW: finite((outA * nominalV) / part.params.efficiency), minVoltageV: part.params.inputMinV }, { kind: 'part', id: part.id, role: 'input' })
+        partElement.set(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: ns[3]!, to: ns[2]!, currentA: finite(outA) }, main))
+        break
+      }
+      case 'charge-controller': {
+        if (!scenario.sunOn) break
+        const arrays = arraysOfController.get(part.id) ?? []
+        const ns = ['pv-pos', 'pv-neg', 'bat-pos', 'bat-neg'].map((t) => node(part.id, t))
+        const wired = arrays.filter((a) => { const neg = node(a.id, 'neg'); return neg !== undefined && supplied.find(neg) === supplied.find(ns[1]!) })
+        if (wired.length === 0) break
+        // The PV input is fed by the arrays; the battery side (and the common negative) needs a bank.
+        if (!canSupply(ns[1], ns[2], ns[3])) { noSupply(part); break }
+        addController(part, wired, ns as number[])
+        break
+      }
+    }
+  }
+  for (const a of design.parts) {
+    if (a.type === 'pv-array' && scenario.sunOn && !partElement.has(a.id) && ![...arraysOfController.values()].some((list) => list.includes(a)))
+      problems.push({ kind: 'array-without-controller', message: `${a.label || a.id} is not wired to a charge controller's PV input`, partIds: [a.id], conductorIds: [] })
+  }
+
+  function addController(part: PartOf<'charge-controller'>, arrays: PartOf<'pv-array'>[], ns: number[]) {
+    const p = part.params
+    const totalImpA = arrays.reduce((s, a) => s + a.params.moduleImpA * a.params.strings, 0)
+    // MPPT holds the array at Vmp; a PWM controller ties it to the battery (nominal voltage here).
+    const operatingV = p.mppt ? Math.min(...arrays.map((a) => a.params.moduleVmpV * a.params.modulesPerString)) : nominalV
+    const availableW = operatingV * Math.min(totalImpA, p.maxPvCurrentA) * p.efficiency
+    const outW = Math.min(availableW, p.outputCurrentA * nominalV)
+    // The controller backs the array off when it clips: scale every array's current by the same share.
+    const share = totalImpA > 0 ? outW / (operatingV * totalImpA * p.efficiency) : 0
+    if (!(share > 0)) return
+    for (const a of arrays) {
+      const pos = node(a.id, 'pos')
+      const neg = node(a.id, 'neg')
+      if (pos === undefined || neg === undefined) continue
+      partElement.set(a.id, add({ kind: 'isource', id: `p:${a.id}`, from: neg, to: pos, currentA: finite(a.params.moduleImpA * a.params.strings * share) }, { kind: 'part', id: a.id, role: 'main' }))
+    }
+    add({ kind: 'resistor', id: `p:${part.id}#pv`, a: ns[0], b: ns[1], resistanceOhm: finite(operatingV / (totalImpA * share), 1e6) }, { kind: 'part', id: part.id, role: 'pv-input' })
+    partElement.set(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: ns[2], neg: ns[3], powerW: -finite(outW), minVoltageV }, { kind: 'part', id: part.id, role: 'main' }))
+  }
+
+  return {
+    circuit: { nodeCount: nodes.nodeCount, nodeNames: nodes.nodeNames, elements },
+    nodes, owners, conductorElement, partElement, deviceElement, batteryNegNodes, problems,
+  }
+}
+
+/** PV arrays whose positive reaches a controller's PV input through conductors and closed devices. */
+export function pvArraysByController(design: Design, nodes: TerminalNodes, series: UnionFind): Map<string, PartOf<'pv-array'>[]> {
+  const controllerOfGroup = new Map<number, string>()
+  for (const part of design.parts) {
+    if (part.type !== 'charge-controller') continue
+    const pv = nodes.nodeOf.get(terminalKey(part.id, 'pv-pos'))
+    if (pv !== undefined && !controllerOfGroup.has(series.find(pv))) controllerOfGroup.set(series.find(pv), part.id)
+  }
+  const result = new Map<string, PartOf<'pv-array'>[]>()
+  for (const part of design.parts) {
+    if (part.type !== 'pv-array') continue
+    const pos = nodes.nodeOf.get(terminalKey(part.id, 'pos'))
+    const controller = pos === undefined ? undefined : controllerOfGroup.get(series.find(pos))
+    if (!controller) continue
+    const list = result.get(controller) ?? []
+    list.push(part)
+    result.set(controller, list)
+  }
+  return result
+}
+

@@ -1,0 +1,34 @@
+import { makeFinding } from '../findings'
+import type { Finding } from '../types'
+import type { Rule } from './types'
+
+/** Parts whose every terminal must be wired to work at all. */
+const ALL_TERMINALS_NEEDED = new Set(['battery', 'load', 'inverter', 'fuse', 'breaker', 'battery-switch', 'shunt', 'mains-charger', 'pv-array'])
+
+/** Floating parts (nothing wired) and open terminals, named so the designer can find them. */
+export const connectivityRule: Rule = {
+  id: 'part-not-connected',
+  title: 'Part not connected',
+  severity: 'warning',
+  source: 'Circuit model (every terminal is a node); common practice',
+  run(ctx) {
+    const findings: Finding[] = []
+    const wired = new Set<string>()
+    for (const c of ctx.design.conductors) {
+      wired.add(`${c.from.partId}:${c.from.terminal}`)
+      wired.add(`${c.to.partId}:${c.to.terminal}`)
+    }
+    for (const part of ctx.design.parts) {
+      const terminals = ctx.nodes.terminalsOf.get(part.id) ?? []
+      const open = terminals.filter((t) => !wired.has(`${part.id}:${t.id}`))
+      if (open.length === terminals.length && terminals.length > 0) {
+        findings.push(makeFinding({ ruleId: this.id, severity: 'warning', title: 'Part not connected', partIds: [part.id], conductorIds: [],
+          message: `${part.label || part.id} has no conductor on any terminal; it takes no part in the analysis.`, source: this.source }))
+      } else if (open.length > 0 && ALL_TERMINALS_NEEDED.has(part.type)) {
+        findings.push(makeFinding({ ruleId: 'terminal-not-connected', severity: 'warning', title: 'Terminal not connected', partIds: [part.id], conductorIds: [],
+          message: `${part.label || part.id}: terminal${open.length > 1 ? 's' : ''} ${open.map((t) => t.label).join(', ')} ${open.length > 1 ? 'are' : 'is'} not wired.`, source: this.source }))
+      }
+    }
+    return findings
+  },
+}
