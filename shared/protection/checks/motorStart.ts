@@ -1,6 +1,6 @@
 import { makeFinding } from '../../analysis/findings'
 import type { Finding } from '../../analysis/types'
-import { DEVICE_FAMILY_IDS, standardRatingsA, type DeviceFamilyId } from '../ratings'
+import { DEVICE_FAMILY_IDS, getDeviceFamily, standardRatingsA, type DeviceFamilyId } from '../ratings'
 import { deviceBand, getTimeCurrentFamily, hasTimeCurrentModel } from '../timeCurrent'
 import { amps, seconds } from './_lib/format'
 import { partIdOf } from './_lib/chain'
@@ -28,6 +28,16 @@ function fits(device: ProtectionDevice, familyId: string, ratingA: number, pulse
   return unclearedFault({ ...device, familyId, ratingA }, context) === null
 }
 
+/**
+ * Only suggest a family whose catalogued interrupting rating covers the fault at the device; a family
+ * with no family-wide figure (per marking) is not suggested when the fault current is known.
+ */
+function interruptsFault(familyId: string, faultA: number | undefined): boolean {
+  if (!(typeof faultA === 'number' && faultA > 0)) return true
+  const rating = getDeviceFamily(familyId as DeviceFamilyId).interruptingRating
+  return rating !== null && rating.currentA >= faultA
+}
+
 interface Pulse {
   currentA: number
   durationS: number
@@ -43,6 +53,7 @@ function timeDelayAlternative(device: ProtectionDevice, pulse: Pulse, context: R
     // Thermal breakers ride through starts but cannot clear fast faults (see faultClearing.ts).
     if (!band.timeDelay || band.kind === 'thermal-breaker') continue
     if (!ratingsOf(familyId).includes(device.ratingA)) continue
+    if (!interruptsFault(familyId, device.faultCurrentAtDeviceA)) continue
     if (fits(device, familyId, device.ratingA, pulse, context)) return familyId
   }
   return null

@@ -49,6 +49,12 @@ describe('motor-start-nuisance-open (device band vs start pulse; inrush common p
     expect(findings.map((f) => f.ruleId)).toEqual(['motor-start-nuisance-open'])
     expect(findings[0].suggestion!.text).not.toMatch(/6\.3 × 32/)
   })
+  it('never suggests a family whose catalogued interrupting rating is below the fault at the device', () => {
+    // 6.3 × 32 mm cartridges are catalogued at 35 A at 250 V AC (UL 248-14 minimum, ratings.ts): a 2 kA fault rules them out.
+    const [f] = run([{ id: 'F1', familyId: 'blade-regular', ratingA: 10, conductor: awg14, faultCurrentAtDeviceA: 2000, loadStarts: [pump] }])
+    expect(f.ruleId).toBe('motor-start-nuisance-open')
+    expect(f.suggestion!.text).not.toMatch(/6\.3 × 32/)
+  })
   it('adds the current of the other loads to the start pulse', () => {
     const small = { loadId: 'fan', runningCurrentA: 2, inrushMultiple: 3, startDurationS: 0.1 }
     const d = { id: 'F3', familyId: 'blade-regular', ratingA: 10, loadStarts: [small] }
