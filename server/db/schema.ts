@@ -41,6 +41,23 @@ export const users = pgTable('users', {
   updatedAt: updatedAt(),
 })
 
+/**
+ * One row per signed-in session; the JWT's `jti` names it. Deleting the row ends the session at once
+ * (sign-out, password reset, removal of the member), although the JWT itself would still be valid.
+ */
+export const sessions = pgTable(
+  'sessions',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index('sessions_user_idx').on(t.userId)],
+)
+
 /** A user belongs to one organisation (unique user_id); the role is read on every request. */
 export const memberships = pgTable(
   'memberships',

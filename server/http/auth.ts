@@ -5,14 +5,15 @@ import type { Request, RequestHandler } from 'express'
 import { can, type Action, type Role } from '../../shared/api/roles'
 import type { AppConfig } from '../config'
 import type { Db } from '../db/client'
-import { findSessionContext } from '../modules/auth/users.repository'
-import { SESSION_COOKIE, verifySessionToken } from '../security/session-token'
+import { authenticateSessionToken } from '../modules/auth/sessions'
+import { SESSION_COOKIE } from '../security/session-token'
 import { forbidden, unauthenticated } from './errors'
 
 export interface AuthContext {
   user: { id: string; name: string; email: string }
   organization: { id: string; name: string }
   role: Role
+  sessionId: string
   expiresAt: Date
 }
 
@@ -35,11 +36,13 @@ export function createRequireSession(deps: { db: Db; config: AppConfig }): Reque
   return async (req, _res, next) => {
     const token: unknown = req.cookies?.[SESSION_COOKIE]
     if (typeof token !== 'string' || token === '') throw unauthenticated()
-    const claims = await verifySessionToken(token, deps.config.jwtSecret)
-    if (!claims) throw unauthenticated('Your session has expired. Sign in again.')
-    const context = await findSessionContext(deps.db, claims.userId, claims.organizationId)
-    if (!context) throw unauthenticated('Your account is no longer active. Sign in again.')
-    req.auth = { ...context, expiresAt: claims.expiresAt }
+    const check = await authenticateSessionToken(deps, token)
+    if (!check.ok) {
+      throw unauthenticated(
+        check.reason === 'invalid' ? 'Your session has expired. Sign in again.' : 'Your session has ended. Sign in again.',
+      )
+    }
+    req.auth = check.auth
     next()
   }
 }

@@ -1,5 +1,6 @@
-// The session is an HS256 JWT carrying the user and organisation ids and the expiry. The role is not in
-// it: requireSession reads the role from the database on every request, so a change applies at once.
+// The session is an HS256 JWT carrying the user and organisation ids, the session id (jti) and the
+// expiry. The role is not in it: requireSession reads the role and checks that the session row still
+// exists on every request, so a role change, a sign-out or a removal applies at once.
 import { SignJWT, jwtVerify } from 'jose'
 
 export const SESSION_COOKIE = 'aw_session'
@@ -7,33 +8,29 @@ export const SESSION_COOKIE = 'aw_session'
 export interface SessionClaims {
   userId: string
   organizationId: string
+  sessionId: string
   expiresAt: Date
 }
 
-export async function signSessionToken(
-  claims: { userId: string; organizationId: string },
-  secret: Uint8Array,
-  ttlSeconds: number,
-): Promise<{ token: string; expiresAt: Date }> {
-  const nowS = Math.floor(Date.now() / 1000)
-  const expS = nowS + ttlSeconds
-  const token = await new SignJWT({ org: claims.organizationId })
+export async function signSessionToken(claims: SessionClaims, secret: Uint8Array): Promise<string> {
+  return new SignJWT({ org: claims.organizationId })
     .setProtectedHeader({ alg: 'HS256' })
     .setSubject(claims.userId)
-    .setIssuedAt(nowS)
-    .setExpirationTime(expS)
+    .setJti(claims.sessionId)
+    .setIssuedAt()
+    .setExpirationTime(Math.floor(claims.expiresAt.getTime() / 1000))
     .sign(secret)
-  return { token, expiresAt: new Date(expS * 1000) }
 }
 
 /** The claims of a valid, unexpired token; undefined for anything else (bad signature, expired, malformed). */
 export async function verifySessionToken(token: string, secret: Uint8Array): Promise<SessionClaims | undefined> {
   try {
     const { payload } = await jwtVerify(token, secret, { algorithms: ['HS256'] })
-    if (typeof payload.sub !== 'string' || typeof payload.org !== 'string' || typeof payload.exp !== 'number') {
+    const { sub, org, jti, exp } = payload
+    if (typeof sub !== 'string' || typeof org !== 'string' || typeof jti !== 'string' || typeof exp !== 'number') {
       return undefined
     }
-    return { userId: payload.sub, organizationId: payload.org, expiresAt: new Date(payload.exp * 1000) }
+    return { userId: sub, organizationId: org, sessionId: jti, expiresAt: new Date(exp * 1000) }
   } catch {
     return undefined
   }

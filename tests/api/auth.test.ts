@@ -1,5 +1,6 @@
 // Sign-up, sign-in, session cookie, rate limit, expiry, sign-out and password reset against the real
 // server and PostgreSQL.
+import { randomUUID } from 'node:crypto'
 import { eq } from 'drizzle-orm'
 import { SignJWT } from 'jose'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
@@ -138,30 +139,45 @@ describe('sessions', () => {
     expect(res.body.error).toEqual({ code: 'unauthenticated', message: 'Your session has expired. Sign in again.' })
   })
 
-  it('accepts a valid token signed with the secret and rejects one signed with another secret', async () => {
+  it('rejects a token signed with another secret, and a well-signed one naming no live session', async () => {
     const sign = (secret: Uint8Array) =>
-      new SignJWT({ org: org.id }).setProtectedHeader({ alg: 'HS256' }).setSubject(org.owner.id).setExpirationTime('1h').sign(secret)
-    const good = await apiClient(server.baseUrl, `${SESSION_COOKIE}=${await sign(server.config.jwtSecret)}`).get('/api/auth/me')
-    expect(good.status).toBe(200)
+      new SignJWT({ org: org.id })
+        .setProtectedHeader({ alg: 'HS256' })
+        .setSubject(org.owner.id)
+        .setJti(randomUUID())
+        .setExpirationTime('1h')
+        .sign(secret)
     const forged = await apiClient(server.baseUrl, `${SESSION_COOKIE}=${await sign(new TextEncoder().encode('x'.repeat(40)))}`).get('/api/auth/me')
     expect(forged.status).toBe(401)
+    expect(forged.body.error.message).toBe('Your session has expired. Sign in again.')
+    const noSession = await apiClient(server.baseUrl, `${SESSION_COOKIE}=${await sign(server.config.jwtSecret)}`).get('/api/auth/me')
+    expect(noSession.status).toBe(401)
+    expect(noSession.body.error).toEqual({ code: 'unauthenticated', message: 'Your session has ended. Sign in again.' })
   })
 
-  it('logout answers 204 and clears the cookie', async () => {
+  it('logout answers 204, clears the cookie and ends that session only', async () => {
     const api = await signedInClient(server.baseUrl, org.reviewer.email, TEST_PASSWORD)
+    const otherDevice = await signedInClient(server.baseUrl, org.reviewer.email, TEST_PASSWORD)
     const res = await api.post('/api/auth/logout')
     expect(res.status).toBe(204)
     const cleared = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith(`${SESSION_COOKIE}=`))!
     expect(cleared).toMatch(/^aw_session=;/)
     expect(cleared).toMatch(/Expires=Thu, 01 Jan 1970/)
+    // A copy of the old cookie is worthless now; the other device stays signed in.
+    const replay = await api.get('/api/auth/me')
+    expect(replay.status).toBe(401)
+    expect(replay.body.error.message).toBe('Your session has ended. Sign in again.')
+    expect((await otherDevice.get('/api/auth/me')).status).toBe(200)
   })
 })
 
 describe('password reset', () => {
   it('e-mails a single-use link that sets a new password', async () => {
     const signUp = signUpBody()
-    await apiClient(server.baseUrl).post('/api/auth/signup', signUp).expect(201)
+    const signedUp = await apiClient(server.baseUrl).post('/api/auth/signup', signUp).expect(201)
     const api = apiClient(server.baseUrl)
+    const before = apiClient(server.baseUrl, sessionCookieFrom(signedUp.headers))
+    expect((await before.get('/api/auth/me')).status).toBe(200)
 
     const requested = await api.post('/api/auth/password-reset/request', { email: signUp.email })
     expect(requested.status).toBe(202)
@@ -170,6 +186,8 @@ describe('password reset', () => {
     const token = tokenFromLink(mail, '/reset-password', server.baseUrl)
 
     await api.post('/api/auth/password-reset', { token, password: 'a brand new password' }).expect(204)
+    // Sessions opened with the old password end with the reset.
+    expect((await before.get('/api/auth/me')).status).toBe(401)
     await api.post('/api/auth/login', { email: signUp.email, password: signUp.password }).expect(401)
     await api.post('/api/auth/login', { email: signUp.email, password: 'a brand new password' }).expect(200)
 

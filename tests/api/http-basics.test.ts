@@ -1,5 +1,6 @@
 // Cross-cutting HTTP behaviour: the origin check on state-changing requests, the error shape (no stack
 // traces, generic 500), unknown API routes, security headers, and serving the built client.
+import { randomUUID } from 'node:crypto'
 import fs from 'node:fs'
 import os from 'node:os'
 import path from 'node:path'
@@ -81,7 +82,10 @@ describe('errors and headers', () => {
     await broken.close()
     const mailer = createMailer({ host: '127.0.0.1', port: 9, user: undefined, pass: undefined, from: 'x@example.test' })
     const app = createApp({ db: broken.db, config: server.config, mailer })
-    const { token } = await signSessionToken({ userId: org.owner.id, organizationId: org.id }, server.config.jwtSecret, 60)
+    const token = await signSessionToken(
+      { userId: org.owner.id, organizationId: org.id, sessionId: randomUUID(), expiresAt: new Date(Date.now() + 60_000) },
+      server.config.jwtSecret,
+    )
     const originalError = console.error
     console.error = () => {} // the server logs the cause; keep the test output quiet
     try {

@@ -10,7 +10,7 @@ import { createDemoDesign } from '../../shared/design/demo'
 import { invitations } from '../../server/db/schema'
 import { newOneTimeToken } from '../../server/security/one-time-tokens'
 import { createMember, createOrganization, createProject, TEST_PASSWORD, uniqueEmail, type TestOrganization } from '../helpers/factories'
-import { apiClient, signedInClient, type Api, type HttpMethod } from '../helpers/http'
+import { apiClient, freshSessionClient, signedInClient, type Api, type HttpMethod } from '../helpers/http'
 import { startTestServer, type TestServer } from '../helpers/server'
 
 type Actor = Role | 'unsharedClient' | 'anonymous' | 'otherOrgOwner'
@@ -26,6 +26,8 @@ interface RouteCase {
   resource: boolean
   /** The resource is a project: a client without a share of it gets 404. */
   projectScoped: boolean
+  /** The request ends the session it is sent with: send it with a fresh session of the actor. */
+  endsSession?: boolean
   /** Builds a fresh target for one request (mutating routes must not affect the next row). */
   target(): Promise<{ url: string; body?: object }>
 }
@@ -76,6 +78,7 @@ const ROUTES: RouteCase[] = [
   },
   {
     method: 'post', path: '/api/auth/logout', allowed: ALL_ROLES, success: 204, resource: false, projectScoped: false,
+    endsSession: true,
     target: async () => ({ url: '/api/auth/logout' }),
   },
   {
@@ -152,6 +155,14 @@ function expectedStatus(route: RouteCase, actor: Actor): number {
   return route.success
 }
 
+function freshSessionFor(actor: Exclude<Actor, 'anonymous'>): Promise<Api> {
+  const users = { owner: orgA.owner, designer: orgA.designer, reviewer: orgA.reviewer, client: orgA.client, unsharedClient: orgA.otherClient }
+  const ids = actor === 'otherOrgOwner'
+    ? { userId: orgB.owner.id, organizationId: orgB.id }
+    : { userId: users[actor].id, organizationId: orgA.id }
+  return freshSessionClient(server, ids)
+}
+
 const CODE_BY_STATUS: Record<number, string> = { 401: 'unauthenticated', 403: 'forbidden', 404: 'not_found' }
 
 const rows = ROUTES.flatMap((route) =>
@@ -181,7 +192,7 @@ describe('permission matrix', () => {
 
   it.each(rows)('$name as $actor → $expected', async ({ route, actor, expected }) => {
     const { url, body } = await route.target()
-    const api = clients[actor]
+    const api = route.endsSession && actor !== 'anonymous' ? await freshSessionFor(actor) : clients[actor]
     const req = api.send(route.method, url)
     const res = body ? await req.send(body) : await req
     expect(res.status, JSON.stringify(res.body)).toBe(expected)

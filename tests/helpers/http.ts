@@ -1,6 +1,9 @@
 // supertest against a running test server, with the Origin header every state-changing request needs
 // and, optionally, a session cookie.
 import request from 'supertest'
+import type { AppConfig } from '../../server/config'
+import type { DbOrTx } from '../../server/db/client'
+import { startSession } from '../../server/modules/auth/sessions'
 import { SESSION_COOKIE } from '../../server/security/session-token'
 
 export type Api = ReturnType<typeof apiClient>
@@ -36,4 +39,16 @@ export async function signedInClient(baseUrl: string, email: string, password: s
   const res = await apiClient(baseUrl).post('/api/auth/login', { email, password })
   if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`)
   return apiClient(baseUrl, sessionCookieFrom(res.headers))
+}
+
+/**
+ * A client with a brand-new session for the user, started the way sign-in starts one (session row +
+ * signed cookie) but without the bcrypt check: for tests that end sessions (sign-out rows of a table).
+ */
+export async function freshSessionClient(
+  server: { baseUrl: string; db: DbOrTx; config: AppConfig },
+  ids: { userId: string; organizationId: string },
+): Promise<Api> {
+  const { token } = await startSession(server, ids)
+  return apiClient(server.baseUrl, `${SESSION_COOKIE}=${token}`)
 }

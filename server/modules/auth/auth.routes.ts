@@ -11,6 +11,7 @@ import type { RouteDeps } from '../../http/route-deps'
 import { validate } from '../../http/validate'
 import { loadSessionContext, signIn, signUp } from './auth.service'
 import { requestPasswordReset, resetPassword } from './password-reset.service'
+import { deleteSession } from './sessions.repository'
 import { clearSessionCookie, issueSessionCookie, toSession } from './session-cookie'
 
 export function authRoutes(deps: RouteDeps): Router {
@@ -19,18 +20,19 @@ export function authRoutes(deps: RouteDeps): Router {
   const signUpInput = validate({ body: signUpSchema })
   router.post('/signup', signUpInput, async (req, res) => {
     const ids = await signUp(deps, signUpInput.data(req).body)
-    const expiresAt = await issueSessionCookie(res, deps.config, ids)
+    const expiresAt = await issueSessionCookie(res, deps, ids)
     res.status(201).json(toSession(await loadSessionContext(deps, ids), expiresAt))
   })
 
   const signInInput = validate({ body: signInSchema })
   router.post('/login', loginRateLimit(deps.config), signInInput, async (req, res) => {
     const ids = await signIn(deps, signInInput.data(req).body)
-    const expiresAt = await issueSessionCookie(res, deps.config, ids)
+    const expiresAt = await issueSessionCookie(res, deps, ids)
     res.json(toSession(await loadSessionContext(deps, ids), expiresAt))
   })
 
-  router.post('/logout', deps.requireSession, (_req, res) => {
+  router.post('/logout', deps.requireSession, async (req, res) => {
+    await deleteSession(deps.db, authOf(req).sessionId)
     clearSessionCookie(res, deps.config)
     res.status(204).end()
   })

@@ -5,7 +5,7 @@ import { conflict, invalidCredentials } from '../../http/errors'
 import { dummyPasswordHash, hashPassword, verifyPassword } from '../../security/passwords'
 import {
   findMembershipOfUser,
-  findSessionContext,
+  findMemberContext,
   findUserByEmail,
   insertMember,
   insertOrganization,
@@ -53,7 +53,7 @@ export async function signIn(deps: AuthDeps, input: SignInInput) {
 }
 
 export async function loadSessionContext(deps: AuthDeps, ids: { userId: string; organizationId: string }) {
-  const context = await findSessionContext(deps.db, ids.userId, ids.organizationId)
+  const context = await findMemberContext(deps.db, ids.userId, ids.organizationId)
   if (!context) throw new Error('session context vanished right after it was created')
   return context
 }

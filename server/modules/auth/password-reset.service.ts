@@ -6,6 +6,7 @@ import { passwordResetMail } from '../../mail/messages'
 import { hashOneTimeToken, newOneTimeToken } from '../../security/one-time-tokens'
 import { hashPassword } from '../../security/passwords'
 import { insertPasswordReset, lockUsablePasswordReset, markPasswordResetsUsed } from './password-reset.repository'
+import { deleteSessionsOfUser } from './sessions.repository'
 import { findUserByEmail, updatePasswordHash } from './users.repository'
 
 const RESET_TTL_MS = 60 * 60 * 1000
@@ -29,5 +30,7 @@ export async function resetPassword(deps: { db: Db; config: AppConfig }, input: 
     if (!reset) throw invalidRequest(RESET_LINK_INVALID, [{ path: 'token', message: RESET_LINK_INVALID }])
     await updatePasswordHash(tx, reset.userId, passwordHash)
     await markPasswordResetsUsed(tx, reset.userId)
+    // Whoever knew the old password is signed out everywhere.
+    await deleteSessionsOfUser(tx, reset.userId)
   })
 }

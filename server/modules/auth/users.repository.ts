@@ -1,7 +1,7 @@
-import { and, eq } from 'drizzle-orm'
+import { and, eq, gt } from 'drizzle-orm'
 import type { Role } from '../../../shared/api/roles'
 import type { DbOrTx } from '../../db/client'
-import { memberships, organizations, users } from '../../db/schema'
+import { memberships, organizations, sessions, users } from '../../db/schema'
 
 export type UserRow = typeof users.$inferSelect
 
@@ -10,18 +10,43 @@ export async function findUserByEmail(db: DbOrTx, email: string): Promise<UserRo
   return row
 }
 
-/** The user, their organisation and current role, or undefined if the user or membership is gone. */
-export async function findSessionContext(db: DbOrTx, userId: string, organizationId: string) {
+const contextColumns = {
+  user: { id: users.id, name: users.name, email: users.email },
+  organization: { id: organizations.id, name: organizations.name },
+  role: memberships.role,
+}
+
+/** The user, organisation and role right after sign-in (no session check yet). */
+export async function findMemberContext(db: DbOrTx, userId: string, organizationId: string) {
   const [row] = await db
-    .select({
-      user: { id: users.id, name: users.name, email: users.email },
-      organization: { id: organizations.id, name: organizations.name },
-      role: memberships.role,
-    })
+    .select(contextColumns)
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .innerJoin(organizations, eq(organizations.id, memberships.organizationId))
     .where(and(eq(memberships.userId, userId), eq(memberships.organizationId, organizationId)))
+    .limit(1)
+  return row
+}
+
+/** The same, only while the session row is live; undefined if the session, user or membership is gone. */
+export async function findSessionContext(
+  db: DbOrTx,
+  ids: { userId: string; organizationId: string; sessionId: string },
+) {
+  const [row] = await db
+    .select(contextColumns)
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .innerJoin(organizations, eq(organizations.id, memberships.organizationId))
+    .innerJoin(sessions, eq(sessions.userId, users.id))
+    .where(
+      and(
+        eq(memberships.userId, ids.userId),
+        eq(memberships.organizationId, ids.organizationId),
+        eq(sessions.id, ids.sessionId),
+        gt(sessions.expiresAt, new Date()),
+      ),
+    )
     .limit(1)
   return row
 }
@@ -58,3 +83,4 @@ export function isUniqueViolation(error: unknown): boolean {
   const code = (error as { code?: unknown; cause?: { code?: unknown } } | null)
   return code?.code === '23505' || code?.cause?.code === '23505'
 }
+

@@ -24,7 +24,7 @@ export function invitationsRoutes(deps: RouteDeps): Router {
   const acceptInput = validate({ body: acceptInvitationSchema })
   router.post('/accept', acceptInput, async (req, res) => {
     const ids = await acceptInvitation(deps, acceptInput.data(req).body)
-    const expiresAt = await issueSessionCookie(res, deps.config, ids)
+    const expiresAt = await issueSessionCookie(res, deps, ids)
     res.status(201).json(toSession(await loadSessionContext(deps, ids), expiresAt))
   })
 
