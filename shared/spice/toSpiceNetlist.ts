@@ -92,6 +92,9 @@ export function toSpiceNetlist(circuit: Circuit, options: SpiceNetlistOptions): 
     const node = element.kind === 'resistor' ? element.a : element.kind === 'isource' ? element.from : element.pos
     tied[islandOfNode[node]] = 1
   }
+  circuit.nodeNames?.forEach((name, node) => {
+    if (node < circuit.nodeCount && name) lines.push(`* node ${spiceNodeName(node)}: ${comment(name)}`)
+  })
   lines.push('* island references tied to ground')
   islands.forEach((island, k) => {
     if (tied[k]) lines.push(`VGND${k} ${spiceNodeName(island.referenceNode)} 0 DC 0`)

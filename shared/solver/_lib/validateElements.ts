@@ -14,7 +14,10 @@ function isNode(node: unknown, nodeCount: number): boolean {
   return Number.isInteger(node) && (node as number) >= 0 && (node as number) < nodeCount
 }
 
+const KINDS = new Set(['resistor', 'vsource', 'isource', 'cpower'])
+
 function elementError(element: CircuitElement, nodeCount: number): string | null {
+  if (!KINDS.has(element.kind)) return `unknown element kind ${String((element as { kind: unknown }).kind)}`
   if (!isNode(firstNode(element), nodeCount) || !isNode(secondNode(element), nodeCount)) return `terminal node out of range 0..${nodeCount - 1}`
   switch (element.kind) {
     case 'resistor':

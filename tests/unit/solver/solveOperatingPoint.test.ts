@@ -202,6 +202,11 @@ describe('solveOperatingPoint — edge cases', () => {
     expect([...op.elementCurrentA].every(Number.isFinite)).toBe(true)
   })
 
+  it('unknown element kind is invalid, not a crash', () => {
+    const op = solveOperatingPoint({ nodeCount: 2, elements: [battery, { kind: 'diode', id: 'd', a: 1, b: 0 } as never] })
+    expect(op.problems).toContainEqual({ kind: 'invalid-element', elementIds: ['d'], message: 'unknown element kind diode' })
+  })
+
   it('unusable node count does not throw', () => {
     const op = solveOperatingPoint({ nodeCount: Number.NaN, elements: [battery] })
     expect(op.problems[0]).toMatchObject({ kind: 'invalid-element' })

@@ -5,6 +5,7 @@ describe('toSpiceNetlist', () => {
   const deck = toSpiceNetlist(
     {
       nodeCount: 6,
+      nodeNames: ['battery −', 'battery +', 'bus +'],
       elements: [
         { kind: 'vsource', id: 'house bank', pos: 1, neg: 0, voltageV: 12.8, resistanceOhm: 0.004 },
         { kind: 'resistor', id: 'main+', a: 1, b: 2, resistanceOhm: 0.0005 },
@@ -33,6 +34,8 @@ describe('toSpiceNetlist', () => {
 
   it('ties every island to ground, leaves invalid elements out, keeps the title on one line', () => {
     expect(lines[0]).toBe('* Van')
+    expect(lines).toContain('* node n2: bus +')
+    expect(lines).toContain('* node n0: battery ?') // comments stay ASCII
     expect(lines).toContain('VGND0 n0 0 DC 0')
     expect(lines).toContain('VGND1 n3 0 DC 0') // the floating "spare" island
     expect(deck).toContain('* left out (invalid): bad')
