@@ -14,7 +14,8 @@ export function suggestConductor(ctx: RuleContext, c: Conductor, currentA: numbe
   try {
     const size = getConductorSize(c.sizeId)
     const found = smallestPassingSize({
-      currentA: Math.max(0, currentA - 1e-6), lengthM: c.lengthM, // solver round-off must not skip a size that exactly fits allowedDropPercent: Math.max(allowedDropPercent, 1e-6),
+      // Solver round-off (25.000000001 A) must not skip a size that fits exactly.
+      currentA: Math.max(0, currentA - 1e-6), lengthM: c.lengthM, allowedDropPercent: Math.max(allowedDropPercent, 1e-6),
       nominalV: ctx.nominalV, material: c.material, insulationRatingC: c.insulationRatingC,
       ambientC: c.ambientC ?? ctx.design.settings.defaultAmbientC, installation: c.installation,
       bundledCount: c.bundledCount, profile: ctx.profile, system: size.system,
