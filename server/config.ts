@@ -36,6 +36,7 @@ export interface AppConfig {
   bcryptCost: number
   jsonBodyLimit: string
   loginRateLimit: { max: number; windowMs: number }
+  resetRateLimit: { max: number; windowMs: number }
   secureCookies: boolean
 }
 
@@ -104,6 +105,7 @@ export function loadConfig(env: Env = process.env, overrides: Partial<AppConfig>
     bcryptCost: 12,
     jsonBodyLimit: '5mb',
     loginRateLimit: { max: 10, windowMs: 15 * 60 * 1000 },
+    resetRateLimit: { max: 5, windowMs: 60 * 60 * 1000 },
     secureCookies: publicUrl.startsWith('https:'),
   }
   return { ...config, ...overrides }

@@ -205,6 +205,20 @@ describe('password reset', () => {
     expect(await server.outbox.messagesTo(email)).toEqual([])
   })
 
+  it('sends at most 5 reset e-mails per hour for one address (then 429)', async () => {
+    const signUp = signUpBody()
+    await apiClient(server.baseUrl).post('/api/auth/signup', signUp).expect(201)
+    const api = apiClient(server.baseUrl)
+    for (let i = 0; i < 5; i++) await api.post('/api/auth/password-reset/request', { email: signUp.email }).expect(202)
+    const sixth = await api.post('/api/auth/password-reset/request', { email: signUp.email })
+    expect(sixth.status).toBe(429)
+    expect(sixth.body.error).toEqual({
+      code: 'rate_limited',
+      message: 'Too many reset requests for this address. Wait 60 minutes and try again.',
+    })
+    expect(await server.outbox.messagesTo(signUp.email)).toHaveLength(5)
+  })
+
   it('rejects a new password that is too short, with the field path', async () => {
     const res = await apiClient(server.baseUrl).post('/api/auth/password-reset', { token: 'x'.repeat(43), password: 'short' })
     expect(res.status).toBe(400)

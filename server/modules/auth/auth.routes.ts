@@ -6,7 +6,7 @@ import {
   signUpSchema,
 } from '../../../shared/api/auth.schemas'
 import { authOf } from '../../http/auth'
-import { loginRateLimit } from '../../http/login-rate-limit'
+import { loginRateLimit, passwordResetRateLimit } from '../../http/rate-limits'
 import type { RouteDeps } from '../../http/route-deps'
 import { validate } from '../../http/validate'
 import { loadSessionContext, signIn, signUp } from './auth.service'
@@ -43,7 +43,7 @@ export function authRoutes(deps: RouteDeps): Router {
   })
 
   const resetRequestInput = validate({ body: passwordResetRequestSchema })
-  router.post('/password-reset/request', resetRequestInput, async (req, res) => {
+  router.post('/password-reset/request', passwordResetRateLimit(deps.config), resetRequestInput, async (req, res) => {
     await requestPasswordReset(deps, resetRequestInput.data(req).body.email)
     res.status(202).json({ ok: true })
   })
