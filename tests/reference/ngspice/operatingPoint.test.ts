@@ -83,6 +83,7 @@ describe('operating point vs ngspice', () => {
     { loads: 60, seed: 12 },
     { loads: 150, seed: 13 },
     { loads: 400, seed: 14 },
+    { loads: 1000, seed: 7 }, // the 1 000-load benchmark circuit (2 056 nodes)
   ])('generated radial system with $loads loads (seed $seed)', ({ loads, seed }) => {
     const circuit = radialCircuit({ loads, seed })
     const { currentRel, voltageRel } = compareWithNgspice(circuit)
