@@ -19,7 +19,11 @@ export function deviceBand(familyId: string, ratingA: number): DeviceBand {
   if (typeof ratingA !== 'number' || !Number.isFinite(ratingA) || ratingA <= 0) {
     throw new RangeError(`Device rating must be a positive number of amperes, got ${String(ratingA)}`)
   }
-  const def = getTimeCurrentFamily(familyId).bandAt(ratingA)
+  return bandFromDefinition(familyId, ratingA, getTimeCurrentFamily(familyId).bandAt(ratingA))
+}
+
+/** A band from a definition in multiples of `ratingA` (catalogue families and datasheet devices alike). */
+export function bandFromDefinition(familyId: string, ratingA: number, def: BandDefinition): DeviceBand {
   const minMeltS = (currentA: number) => minTimeS(def, currentA / ratingA)
   const maxClearS = (currentA: number) => maxTimeS(def, currentA / ratingA)
   return {

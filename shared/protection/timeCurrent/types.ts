@@ -4,9 +4,10 @@
 /**
  * How far a figure can be trusted (the tags of the team's reference notes):
  * verified = read in a public copy of the standard; two-sources = two independent reproductions agree;
- * computed = derived from a formula; recalled = from memory, unverified; common-practice = rule of thumb.
+ * computed = derived from a formula; recalled = from memory, unverified; common-practice = rule of thumb;
+ * datasheet = a device's own published points, entered by a user.
  */
-export type SourceStatus = 'verified' | 'two-sources' | 'computed' | 'recalled' | 'common-practice'
+export type SourceStatus = 'verified' | 'two-sources' | 'computed' | 'recalled' | 'common-practice' | 'datasheet'
 
 export interface CurvePoint {
   /** Current as a multiple of the device rating (I / In). */
