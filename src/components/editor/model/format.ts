@@ -1,4 +1,4 @@
-import { MISSING_VALUE, formatNumber } from '@shared/units'
+import { MISSING_VALUE, formatNumber, formatSignificant } from '@shared/units'
 import { conductorSizeLabel, isConductorSizeId } from '@shared/conductors/sizes'
 
 // Display helpers for the editor: every number on screen goes through these, so a missing or
@@ -6,12 +6,15 @@ import { conductorSizeLabel, isConductorSizeId } from '@shared/conductors/sizes'
 
 export { MISSING_VALUE }
 
-/** Digits chosen by magnitude: 0.0042 Ω, 3.27 V, 12.5 A, 1500 W. */
+/** Digits chosen by magnitude: 0.0042 Ω, 3.27 V, 12.5 A, 1500 W; round-off below 1e-6 shows as 0. */
 export function formatAuto(value: unknown, unit = ''): string {
   if (typeof value !== 'number' || !Number.isFinite(value)) return MISSING_VALUE
   const magnitude = Math.abs(value)
-  const digits = magnitude >= 100 ? 0 : magnitude >= 10 ? 1 : magnitude >= 1 ? 2 : magnitude >= 0.01 ? 3 : 5
-  const text = formatNumber(value, digits)
+  let text: string
+  // Below a micro-unit is solver round-off for every quantity the editor shows.
+  if (magnitude < 1e-6) text = '0'
+  else if (magnitude < 0.01) text = formatSignificant(value, 2)
+  else text = formatNumber(value, magnitude >= 100 ? 0 : magnitude >= 10 ? 1 : magnitude >= 1 ? 2 : 3)
   return unit ? `${text}\u00a0${unit}` : text
 }
 

@@ -37,7 +37,8 @@ export function nodeGeometry(part: Pick<Part, 'type' | 'params'>): NodeGeometry 
   const vertical = Math.max(bySide.left.length, bySide.right.length)
   const horizontal = Math.max(bySide.top.length, bySide.bottom.length)
   const width = Math.max(NODE_WIDTH_PX, (horizontal + 1) * PITCH_PX)
-  const height = Math.max(MIN_HEIGHT_PX, (vertical + 1) * PITCH_PX)
+  // Terminals on the top or bottom edge carry labels inside the box: leave a row for them.
+  const height = Math.max(MIN_HEIGHT_PX + (horizontal > 0 ? GRID_PX : 0), (vertical + 1) * PITCH_PX)
   const placed: PlacedTerminal[] = []
   const ys = (list: TerminalInfo[]) => spread(list.length, height)
   const xs = (list: TerminalInfo[]) => spread(list.length, width)
