@@ -88,8 +88,21 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
     return { id: part.id, currentA, powerW: e !== undefined ? finite(op.elementPowerW[e]) : 0, voltageV }
   })
 
+  // A shorted source: name the conductors joined straight across it as well as the source.
+  const problems = op.problems.map((p) => {
+    if (p.kind !== 'shorted-source') return p
+    const across = new Set<string>()
+    for (const id of p.elementIds) {
+      const source = compiled.circuit.elements.find((el) => el.id === id)
+      if (source?.kind !== 'vsource') continue
+      for (const el of compiled.circuit.elements) {
+        if (el.kind === 'resistor' && ((el.a === source.pos && el.b === source.neg) || (el.a === source.neg && el.b === source.pos))) across.add(el.id)
+      }
+    }
+    return { ...p, elementIds: [...p.elementIds, ...across] }
+  })
   const findings = [
-    ...solverProblemFindings(op.problems, scenario.id, scenario.name),
+    ...solverProblemFindings(problems, scenario.id, scenario.name),
     ...compileProblemFindings(compiled.problems, scenario.id),
   ]
   const broken = op.problems.some((p) => p.kind === 'shorted-source' || p.kind === 'source-loop' || p.kind === 'invalid-element')

@@ -32,3 +32,26 @@ export const connectivityRule: Rule = {
     return findings
   },
 }
+
+/** A conductor from a positive terminal to a negative one is a short or a miswire. */
+export const conductorPolarityRule: Rule = {
+  id: 'conductor-polarity',
+  title: 'Conductor joins positive to negative',
+  severity: 'error',
+  source: 'Circuit model (terminal polarity from the part catalogue); common practice',
+  run(ctx) {
+    const findings: Finding[] = []
+    const polarity = (partId: string, terminal: string) => ctx.nodes.terminalsOf.get(partId)?.find((t) => t.id === terminal)?.polarity
+    for (const c of ctx.design.conductors) {
+      const a = polarity(c.from.partId, c.from.terminal)
+      const b = polarity(c.to.partId, c.to.terminal)
+      if (!a || !b || a === b) continue
+      findings.push(makeFinding({
+        ruleId: this.id, severity: 'error', title: this.title, partIds: [...new Set([c.from.partId, c.to.partId])].sort(), conductorIds: [c.id],
+        message: `${c.label || c.id} runs from a ${a} terminal (${c.from.partId}:${c.from.terminal}) to a ${b} one (${c.to.partId}:${c.to.terminal}): a short circuit or a wiring mistake.`,
+        source: this.source,
+      }))
+    }
+    return findings
+  },
+}

@@ -1,6 +1,6 @@
 import { chargingSourceProtectionRule, protectionDistanceRule, protectionMissingRule } from './protectionPresence'
 import { conductorAmpacityRule } from './conductorAmpacity'
-import { connectivityRule } from './connectivity'
+import { conductorPolarityRule, connectivityRule } from './connectivity'
 import { deviceAboveAmpacityRule } from './deviceAboveAmpacity'
 import { deviceBelowLoadRule } from './deviceBelowLoad'
 import { deviceInterruptingRule } from './deviceInterrupting'
@@ -30,6 +30,7 @@ export const RULES: readonly Rule[] = [
   pvStringFusesRule,
   partRatingRule,
   connectivityRule,
+  conductorPolarityRule,
 ]
 
 export type { Rule, RuleContext } from './types'
