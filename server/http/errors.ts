@@ -46,16 +46,27 @@ function bodyParserError(error: unknown): HttpError | undefined {
   const type = (error as { type?: unknown } | null)?.type
   if (type === 'entity.parse.failed') return invalidRequest('The request body is not valid JSON')
   if (type === 'entity.too.large') return new HttpError(413, 'payload_too_large', 'The request body is too large')
-  if (typeof type === 'string' && type.startsWith('encoding.') || type === 'charset.unsupported') {
+  if ((typeof type === 'string' && type.startsWith('encoding.')) || type === 'charset.unsupported') {
     return invalidRequest('The request body has an unsupported encoding')
   }
   return undefined
 }
 
+/** Client errors raised inside Express: the router's URIError (a malformed %-escape in a path, status
+ * 400) and http-errors marked `expose`. */
+function expressClientError(error: unknown): HttpError | undefined {
+  const { status, expose } = (error ?? {}) as { status?: unknown; expose?: unknown }
+  if (typeof status !== 'number' || status < 400 || status > 499) return undefined
+  if (error instanceof URIError) return invalidRequest('The address contains an invalid %-escape')
+  if (expose !== true) return undefined
+  if (status === 404) return notFound('Page')
+  return invalidRequest('The request could not be read')
+}
+
 export function toHttpError(error: unknown): HttpError | undefined {
   if (error instanceof HttpError) return error
   if (error instanceof ZodError) return invalidRequestFromZod(error)
-  return bodyParserError(error)
+  return bodyParserError(error) ?? expressClientError(error)
 }
 
 export const errorMiddleware: ErrorRequestHandler = (error, req, res, _next) => {

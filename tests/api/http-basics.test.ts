@@ -69,6 +69,18 @@ describe('errors and headers', () => {
     expect(res.body.error).toEqual({ code: 'not_found', message: 'API route not found' })
   })
 
+  it('answers a malformed %-escape in a path with 400, not 500', async () => {
+    const res = await apiClient(server.baseUrl).get('/api/invitations/lookup/%E0%A4%A')
+    expect(res.status).toBe(400)
+    expect(res.body.error).toEqual({ code: 'invalid_request', message: 'The address contains an invalid %-escape' })
+  })
+
+  it('answers a JSON body that is not an object with 400 and the root path', async () => {
+    const res = await apiClient(server.baseUrl).post('/api/auth/login', [1, 2])
+    expect(res.status).toBe(400)
+    expect(res.body.error.fields).toEqual([{ path: '', message: 'Invalid input: expected object, received array' }])
+  })
+
   it('sets nosniff, no-store for the API, and no X-Powered-By', async () => {
     const res = await request(server.baseUrl).get('/api/health')
     expect(res.headers['x-content-type-options']).toBe('nosniff')
