@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 import { runAnalyzeCli } from '../../../server/cli/analyze'
+import { BAD_DESIGN_EXPECTED_PATHS } from '../../../server/cli/examples/faulty'
 import { CAUTION } from '../../../server/cli/report'
 
 // The command line in-process (fast, many cases); analyze.spawn.test.ts runs the real command.
@@ -46,6 +47,7 @@ describe('analyze CLI, input errors (exit 2)', () => {
     expect(r.err).toContain('  parts[0].params.capacityAh: Capacity per battery must be at least 1 Ah')
     expect(r.err).toContain('  conductors[0].sizeId: Choose a conductor size such as awg-10 or mm2-16')
     expect(r.err).toContain('  scenarios: Add at least one scenario')
+    for (const path of BAD_DESIGN_EXPECTED_PATHS) expect(r.err).toContain(`\n  ${path}: `)
   })
 
   it('shows "(document)" for an error about the whole document', async () => {

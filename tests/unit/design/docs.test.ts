@@ -1,12 +1,10 @@
-import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
 import { PART_CATALOGUE } from '../../../shared/design/catalogue'
 import { PART_TYPES, parseDesign } from '../../../shared/design/schema'
+import doc from '../../../docs/design-format.md?raw'
 
 // docs/design-format.md must keep up with the schema: every part type, parameter and terminal is
 // described, and its minimal example is a valid design.
-
-const doc = readFileSync(new URL('../../../docs/design-format.md', import.meta.url), 'utf8')
 
 /** The section of the page about one part type: from its heading to the next heading. */
 function sectionOf(type: string): string {

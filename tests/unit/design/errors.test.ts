@@ -1,8 +1,7 @@
-import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
 import { createDemoDesign } from '../../../shared/design/demo'
-import { parseDesign, type Design } from '../../../shared/design/schema'
-import { BAD_DESIGN_EXPECTED_PATHS } from '../../../server/cli/examples/faulty'
+import { parseDesign } from '../../../shared/design/schema'
+import bad from '../../../examples/bad-design.json'
 
 // Bad input must come back as field paths with sentences a person can act on, never a throw.
 
@@ -11,16 +10,18 @@ const errorsOf = (input: unknown) => {
   return result.ok ? [] : result.errors
 }
 
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- tests reshape the document freely, as a file could
+type Loose = any
+
 /** The demo with one change applied (a deep copy, so cases stay independent). */
-function demoWith(change: (d: Design & Record<string, any>) => void): unknown {
-  const design = structuredClone(createDemoDesign()) as Design & Record<string, any>
+function demoWith(change: (d: Loose) => void): unknown {
+  const design: Loose = structuredClone(createDemoDesign())
   change(design)
   return design
 }
 
 describe('examples/bad-design.json', () => {
   it('reports every planted mistake at its exact path, with its message', () => {
-    const bad = JSON.parse(readFileSync(new URL('../../../examples/bad-design.json', import.meta.url), 'utf8'))
     expect(errorsOf(bad)).toEqual([
       { path: 'name', message: 'Enter the design name' },
       { path: 'settings.nominalVoltageV', message: 'Choose a system voltage of 12, 24 or 48 V' },
@@ -32,12 +33,11 @@ describe('examples/bad-design.json', () => {
       { path: 'conductors[0].lengthM', message: 'Length must be more than 0 m' },
       { path: 'scenarios', message: 'Add at least one scenario' },
     ])
-    expect(errorsOf(bad).map((e) => e.path)).toEqual([...BAD_DESIGN_EXPECTED_PATHS])
   })
 })
 
 describe('field errors on an otherwise valid design', () => {
-  const cases: [string, (d: Design & Record<string, any>) => void, string, string][] = [
+  const cases: [string, (d: Loose) => void, string, string][] = [
     ['missing capacity', (d) => delete d.parts[5].params.capacityAh, 'parts[5].params.capacityAh', 'Enter the capacity per battery (Ah)'],
     ['capacity as text', (d) => (d.parts[5].params.capacityAh = '200'), 'parts[5].params.capacityAh', 'Capacity per battery must be a number'],
     ['fractional series count', (d) => (d.parts[5].params.seriesCount = 1.5), 'parts[5].params.seriesCount', 'Batteries in series must be a whole number'],

@@ -1,20 +1,32 @@
-import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
 import { PART_CATALOGUE, PART_TYPE_LIST, partTerminals } from '../../../shared/design/catalogue'
 import { createDemoDesign, createEmptyDesign } from '../../../shared/design/demo'
 import { PART_TYPES, parseDesign, type DesignSettings } from '../../../shared/design/schema'
+import demoFile from '../../../examples/demo-expedition-truck.json'
+import floatingFile from '../../../examples/floating-part.json'
+import sailboatFile from '../../../examples/sailboat-24v.json'
+import vanFile from '../../../examples/small-van-12v.json'
 
-const example = (name: string): unknown => JSON.parse(readFileSync(new URL(`../../../examples/${name}`, import.meta.url), 'utf8'))
+const EXAMPLES: Record<string, unknown> = {
+  'demo-expedition-truck.json': demoFile,
+  'small-van-12v.json': vanFile,
+  'sailboat-24v.json': sailboatFile,
+  'floating-part.json': floatingFile,
+}
 
 describe('parseDesign accepts', () => {
+  it('examples/demo-expedition-truck.json as exactly the built-in demo', () => {
+    expect(parseDesign(demoFile)).toEqual({ ok: true, design: createDemoDesign() })
+  })
+
   it('the demo design unchanged', () => {
     const demo = createDemoDesign()
     const result = parseDesign(demo)
     expect(result).toEqual({ ok: true, design: demo })
   })
 
-  it.each(['demo-expedition-truck.json', 'small-van-12v.json', 'sailboat-24v.json', 'floating-part.json'])('examples/%s', (name) => {
-    const result = parseDesign(example(name))
+  it.each(Object.keys(EXAMPLES))('examples/%s', (name) => {
+    const result = parseDesign(EXAMPLES[name])
     expect(result.ok ? [] : result.errors).toEqual([])
   })
 
@@ -50,7 +62,7 @@ describe('catalogue', () => {
     for (const type of PART_TYPES) expect(PART_CATALOGUE[type].type).toBe(type)
   })
 
-  it.each(PART_TYPES.flatMap((type) => [12, 24, 48].map((v) => [type, v] as const)))('defaults of %s at %i V are valid params', (type, v) => {
+  it.each(PART_TYPES.flatMap((type) => ([12, 24, 48] as const).map((v) => [type, v] as const)))('defaults of %s at %i V are valid params', (type, v) => {
     const info = PART_CATALOGUE[type]
     const params = info.defaultParams(settingsFor(v))
     const parsed = info.paramsSchema.safeParse(params)
