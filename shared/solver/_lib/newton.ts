@@ -39,6 +39,8 @@ const enum Linearisation {
   NoLoad,
   Newton,
   Secant,
+  /** Every consuming constant-power element as its low-voltage resistance Vmin²/P: the collapsed state. */
+  Collapsed,
 }
 
 export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Array, options: NewtonOptions): NewtonOutcome {
@@ -68,7 +70,9 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
         g = t.value[e]
         j = -t.extra[e] * t.value[e]
       } else if (kind === ISOURCE) j = t.value[e]
-      else if (mode !== Linearisation.NoLoad) {
+      else if (mode === Linearisation.Collapsed) {
+        if (t.value[e] > 0) g = t.value[e] / (t.extra[e] * t.extra[e])
+      } else if (mode !== Linearisation.NoLoad) {
         const v0 = nodeV[t.p[e]] - nodeV[t.q[e]]
         const powerW = t.value[e]
         const vMin = t.extra[e]
@@ -160,42 +164,62 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
 
   const start = new Float64Array(nodeV.length)
   const step = new Float64Array(n)
-  let iteration = 1
-  for (; iteration <= options.maxIterations; iteration++) {
-    assemble(Linearisation.Newton)
-    if (!factor(Linearisation.Newton)) {
-      assemble(Linearisation.Secant)
-      if (!factor(Linearisation.Secant)) break
+  let used = 0
+  /** Damped Newton from the present voltages; true when converged. Counts iterations in `used`. */
+  const newton = (): boolean => {
+    for (let iteration = 1; iteration <= options.maxIterations; iteration++) {
+      used++
+      assemble(Linearisation.Newton)
+      if (!factor(Linearisation.Newton)) {
+        assemble(Linearisation.Secant)
+        if (!factor(Linearisation.Secant)) return false
+      }
+      x.set(rhs)
+      if (!solveInto(x)) return false
+      let largest = 0
+      for (let k = 0; k < n; k++) {
+        step[k] = x[k] - nodeV[nodeOfUnknown[k]]
+        largest = Math.max(largest, Math.abs(step[k]))
+      }
+      // Step limiting: no load's voltage moves by more than half its present value in one step.
+      let alpha = 1
+      for (const e of cpowers) {
+        const up = unknownOfNode[t.p[e]]
+        const uq = unknownOfNode[t.q[e]]
+        const dv = Math.abs((up >= 0 ? step[up] : 0) - (uq >= 0 ? step[uq] : 0))
+        const limit = STEP_LIMIT * Math.max(Math.abs(nodeV[t.p[e]] - nodeV[t.q[e]]), t.extra[e])
+        if (dv * alpha > limit) alpha = limit / dv
+      }
+      // Backtracking on the KCL residual; the last, shortest step is taken even if it does not help.
+      start.set(nodeV)
+      const previous = residualA
+      for (let halving = 0; ; halving++) {
+        for (let k = 0; k < n; k++) nodeV[nodeOfUnknown[k]] = start[nodeOfUnknown[k]] + alpha * step[k]
+        residualA = computeResidual(nodeV)
+        if (residualA <= previous || halving === LINE_SEARCH_HALVINGS) break
+        alpha /= 2
+      }
+      if (alpha * largest <= options.toleranceV && overTolerance().length === 0) return true
     }
-    x.set(rhs)
-    if (!solveInto(x)) break
-    let largest = 0
-    for (let k = 0; k < n; k++) {
-      step[k] = x[k] - nodeV[nodeOfUnknown[k]]
-      largest = Math.max(largest, Math.abs(step[k]))
-    }
-    // Step limiting: no load's voltage moves by more than half its present value in one step.
-    let alpha = 1
-    for (const e of cpowers) {
-      const up = unknownOfNode[t.p[e]]
-      const uq = unknownOfNode[t.q[e]]
-      const dv = Math.abs((up >= 0 ? step[up] : 0) - (uq >= 0 ? step[uq] : 0))
-      const limit = STEP_LIMIT * Math.max(Math.abs(nodeV[t.p[e]] - nodeV[t.q[e]]), t.extra[e])
-      if (dv * alpha > limit) alpha = limit / dv
-    }
-    // Backtracking on the KCL residual; the last, shortest step is taken even if it does not help.
-    start.set(nodeV)
-    const previous = residualA
-    for (let halving = 0; ; halving++) {
-      for (let k = 0; k < n; k++) nodeV[nodeOfUnknown[k]] = start[nodeOfUnknown[k]] + alpha * step[k]
-      residualA = computeResidual(nodeV)
-      if (residualA <= previous || halving === LINE_SEARCH_HALVINGS) break
-      alpha /= 2
-    }
-    if (alpha * largest <= options.toleranceV && overTolerance().length === 0) {
-      return { converged: true, iterations: iteration, residualA, badNodes: [], factored: true }
-    }
+    return false
+  }
+
+  if (newton()) return { converged: true, iterations: used, residualA, badNodes: [], factored: true }
+  // Past the nose of the loads' P–V curve there is no high-voltage solution: restart from the
+  // collapsed state, where the loads sit on their resistive fallback, and keep the better result.
+  const firstV = nodeV.slice()
+  const firstResidualA = computeResidual(nodeV)
+  assemble(Linearisation.Collapsed)
+  x.set(rhs)
+  if (factor(Linearisation.Collapsed) && solveInto(x)) {
+    setUnknowns(nodeV, x)
+    residualA = computeResidual(nodeV)
+    if (newton()) return { converged: true, iterations: used, residualA, badNodes: [], factored: true }
   }
   residualA = computeResidual(nodeV)
-  return { converged: false, iterations: Math.min(iteration, options.maxIterations), residualA, badNodes: overTolerance(), factored: true }
+  if (!(residualA <= firstResidualA)) {
+    nodeV.set(firstV)
+    residualA = computeResidual(nodeV)
+  }
+  return { converged: false, iterations: used, residualA, badNodes: overTolerance(), factored: true }
 }

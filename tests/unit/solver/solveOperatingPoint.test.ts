@@ -246,6 +246,17 @@ describe('solveOperatingPoint — edge cases', () => {
     for (const array of [op.nodeVoltageV, op.elementCurrentA, op.elementPowerW]) expect([...array].every(Number.isFinite)).toBe(true)
   })
 
+  it('voltage collapse: an unsuppliable load with a low minimum voltage settles on its fallback resistance', () => {
+    // E = 12 V, R = 0.05 Ω, P = 1000 W, Vmin = 1 V: no constant-power solution (E² < 4PR), fallback
+    // resistance Vmin²/P = 1 mΩ, so V = 12 · 0.001 / 0.051 = 0.23529 V (below Vmin, consistent).
+    const op = solveOperatingPoint({
+      nodeCount: 2,
+      elements: [{ ...battery, resistanceOhm: 0.05 }, { kind: 'cpower', id: 'big', pos: 1, neg: 0, powerW: 1000, minVoltageV: 1 }],
+    })
+    close(op.nodeVoltageV[1], (12 * 0.001) / 0.051)
+    expect(problemOf(op.problems, 'not-converged')).toMatchObject({ elementIds: ['big'], cause: 'below-minimum-voltage' })
+  })
+
   it('Newton stopped early reports not-converged with the KCL residual', () => {
     const op = solveOperatingPoint(
       {
@@ -255,7 +266,7 @@ describe('solveOperatingPoint — edge cases', () => {
       { maxIterations: 1 },
     )
     expect(op.status).toBe('not-converged')
-    expect(problemOf(op.problems, 'not-converged')).toMatchObject({ elementIds: ['inv'] })
+    expect(problemOf(op.problems, 'not-converged')).toMatchObject({ elementIds: ['inv'], cause: 'iterations' })
   })
 
   it('current source bridging two islands is invalid', () => {
