@@ -223,6 +223,23 @@ describe('solveOperatingPoint — edge cases', () => {
     close(op.elementCurrentA[1], 60)
   })
 
+  it('options: a circulating-current limit in amperes, and the short threshold', () => {
+    // The 13.0 V / 12.6 V bank above circulates 10 A: over a 5 A limit it is reported as a source loop.
+    const bank: Circuit = {
+      nodeCount: 2,
+      elements: [
+        { kind: 'vsource', id: 'bat1', pos: 1, neg: 0, voltageV: 13.0, resistanceOhm: 0.01 },
+        { kind: 'vsource', id: 'bat2', pos: 1, neg: 0, voltageV: 12.6, resistanceOhm: 0.03 },
+      ],
+    }
+    expect(problemOf(solveOperatingPoint(bank, { sourceLoopLimitA: 5 }).problems, 'source-loop')?.elementIds).toEqual(['bat1', 'bat2'])
+    expect(problemOf(solveOperatingPoint(bank, { sourceLoopLimitA: 11 }).problems, 'source-loop')).toBeUndefined()
+    // A 0.5 Ω link across the terminals is a short only if the threshold says so (terminal voltage stays 10 V).
+    const linked: Circuit = { nodeCount: 2, elements: [battery, { kind: 'resistor', id: 'link', a: 1, b: 0, resistanceOhm: 0.5 }] }
+    expect(problemOf(solveOperatingPoint(linked).problems, 'shorted-source')).toBeUndefined()
+    expect(problemOf(solveOperatingPoint(linked, { shortResistanceOhm: 1 }).problems, 'shorted-source')?.elementIds).toEqual(['bat'])
+  })
+
   it('a battery reversed into a bank: each is the other\'s short', () => {
     // Both discharge I = (12 + 12) / 0.2 = 120 A; terminal voltage 12 − 120 · 0.1 = 0 V for both.
     const op = solveOperatingPoint({
