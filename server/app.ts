@@ -10,6 +10,7 @@ import { errorMiddleware, HttpError, notFound } from './http/errors'
 import { originCheck } from './http/origin'
 import type { RouteDeps } from './http/route-deps'
 import type { Mailer } from './mail/mailer'
+import { createAnalyzeRouter } from './modules/analyze/analyze.routes'
 import { authRoutes } from './modules/auth/auth.routes'
 import { designsRoutes } from './modules/designs/designs.routes'
 import { invitationsRoutes } from './modules/invitations/invitations.routes'
@@ -50,6 +51,8 @@ export function createApp({ db, config, mailer }: AppDeps): Express {
   api.use('/members', membersRoutes(deps))
   api.use('/invitations', invitationsRoutes(deps))
   api.use('/outbox', outboxRoutes(deps))
+  // Any signed-in role may analyse (the router defines POST /analyze itself).
+  api.post('/analyze', deps.requireSession, createAnalyzeRouter())
   api.use(() => {
     throw notFound('API route')
   })

@@ -144,6 +144,10 @@ const ROUTES: RouteCase[] = [
     method: 'get', path: '/api/outbox', allowed: ['owner'], success: 200, resource: false, projectScoped: false,
     target: async () => ({ url: '/api/outbox' }),
   },
+  {
+    method: 'post', path: '/api/analyze', allowed: ALL_ROLES, success: 200, resource: false, projectScoped: false,
+    target: async () => ({ url: '/api/analyze', body: { design: createDemoDesign() } }),
+  },
 ]
 
 function expectedStatus(route: RouteCase, actor: Actor): number {
