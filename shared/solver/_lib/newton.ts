@@ -128,6 +128,13 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
     return worst
   }
 
+  const withinTolerance = (): boolean => {
+    for (let k = 0; k < n; k++) {
+      if (!(Math.abs(residual[k]) <= options.toleranceA + RELATIVE_RESIDUAL * absSum[k])) return false
+    }
+    return true
+  }
+
   const overTolerance = (): number[] => {
     const nodes: number[] = []
     for (let k = 0; k < n; k++) {
@@ -152,7 +159,7 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
 
   if (cpowers.length === 0) {
     // Linear: the factorisation is exact; refine against rounding (A δ = −r, r = KCL residual).
-    for (let pass = 0; pass < 2 && overTolerance().length > 0; pass++) {
+    for (let pass = 0; pass < 2 && !withinTolerance(); pass++) {
       for (let k = 0; k < n; k++) x[k] = -residual[k]
       if (!solveInto(x)) break
       for (let k = 0; k < n; k++) nodeV[nodeOfUnknown[k]] += x[k]
@@ -196,10 +203,11 @@ export function solveNodal(sys: NodalSystem, t: ElementTable, nodeV: Float64Arra
       for (let halving = 0; ; halving++) {
         for (let k = 0; k < n; k++) nodeV[nodeOfUnknown[k]] = start[nodeOfUnknown[k]] + alpha * step[k]
         residualA = computeResidual(nodeV)
-        if (residualA <= previous || halving === LINE_SEARCH_HALVINGS) break
+        // Near the answer the residual is rounding noise: a step that lands within tolerance is taken.
+        if (residualA <= previous || halving === LINE_SEARCH_HALVINGS || withinTolerance()) break
         alpha /= 2
       }
-      if (alpha * largest <= options.toleranceV && overTolerance().length === 0) return true
+      if (alpha * largest <= options.toleranceV && withinTolerance()) return true
     }
     return false
   }
