@@ -5,8 +5,9 @@ import type { Design, DesignError, TerminalRef } from './schema'
 // Checks a schema-valid design for references that only make sense together: ids unique across
 // parts and conductors, conductor ends on real terminals, scenario loads naming load parts.
 
-/** Part types a scenario can switch on or off. */
-export const SWITCHABLE_LOAD_TYPES = ['load', 'inverter'] as const
+/** Part types a scenario can switch on or off: loads and inverters, and chargers (a DC-DC charger
+ * listed as on means the engine is running; a mains charger also runs whenever `chargerOn`). */
+export const SWITCHABLE_LOAD_TYPES = ['load', 'inverter', 'dc-dc-charger', 'mains-charger'] as const
 
 export function checkCrossReferences(design: Design): DesignError[] {
   const errors: DesignError[] = []
@@ -58,7 +59,7 @@ export function checkCrossReferences(design: Design): DesignError[] {
       const part = partsById.get(partId)
       if (!part) push(['scenarios', i, 'loads', partId], `No part has the id "${partId}"`)
       else if (!(SWITCHABLE_LOAD_TYPES as readonly string[]).includes(part.type)) {
-        push(['scenarios', i, 'loads', partId], `"${partId}" is a ${PART_CATALOGUE[part.type].label.toLowerCase()}; scenarios switch only loads and inverters`)
+        push(['scenarios', i, 'loads', partId], `"${partId}" is a ${PART_CATALOGUE[part.type].label.toLowerCase()}; scenarios switch only loads, inverters and chargers`)
       }
     }
   })

@@ -110,7 +110,7 @@ export const scenarioSchema = z.object({
   name: labelText('scenario name').min(1, 'Enter the scenario name'),
   sunOn: flag('the sun is on the array').default(false),
   chargerOn: flag('mains charging is available').default(false),
-  /** Keyed by load or inverter part id; parts not listed are off. */
+  /** Keyed by load, inverter or charger part id (see crossref.ts); parts not listed are off. */
   loads: z.record(z.string(), scenarioLoadSchema, { error: 'List loads as an object keyed by part id' }).default({}),
   motorStart: flag('motor loads are starting').optional(),
 })

@@ -60,7 +60,7 @@ describe('cross-reference checks', () => {
       d.scenarios[1].loads['pump 2'] = { on: true, level: 1 }
     })
     expect(errors).toEqual([
-      { path: 'scenarios[1].loads["house-bank"]', message: '"house-bank" is a battery bank; scenarios switch only loads and inverters' },
+      { path: 'scenarios[1].loads["house-bank"]', message: '"house-bank" is a battery bank; scenarios switch only loads, inverters and chargers' },
       { path: 'scenarios[1].loads["pump 2"]', message: 'No part has the id "pump 2"' },
     ])
   })
