@@ -4,7 +4,8 @@ import { randomUUID } from 'node:crypto'
 import { eq } from 'drizzle-orm'
 import { SignJWT } from 'jose'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { users } from '../../server/db/schema'
+import { passwordResets, users } from '../../server/db/schema'
+import { newOneTimeToken } from '../../server/security/one-time-tokens'
 import { bcryptCostOf } from '../../server/security/passwords'
 import { SESSION_COOKIE } from '../../server/security/session-token'
 import { createOrganization, TEST_PASSWORD, uniqueEmail, type TestOrganization } from '../helpers/factories'
@@ -217,6 +218,15 @@ describe('password reset', () => {
       message: 'Too many reset requests for this address. Wait 60 minutes and try again.',
     })
     expect(await server.outbox.messagesTo(signUp.email)).toHaveLength(5)
+  })
+
+  it('refuses an expired reset token (400) and leaves the password alone', async () => {
+    const { token, tokenHash } = newOneTimeToken()
+    await server.db.insert(passwordResets).values({ userId: org.designer.id, tokenHash, expiresAt: new Date(Date.now() - 1000) })
+    const res = await apiClient(server.baseUrl).post('/api/auth/password-reset', { token, password: 'taken over password' })
+    expect(res.status).toBe(400)
+    expect(res.body.error.message).toBe('This reset link is invalid, already used or expired. Ask for a new one.')
+    await apiClient(server.baseUrl).post('/api/auth/login', { email: org.designer.email, password: TEST_PASSWORD }).expect(200)
   })
 
   it('rejects a new password that is too short, with the field path', async () => {

@@ -1,6 +1,8 @@
 // Members and invitations: invite → e-mail with a link → accept → signed in with that role; role
 // changes and removals take effect on the very next request; an organisation always keeps an owner.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { invitations } from '../../server/db/schema'
+import { newOneTimeToken } from '../../server/security/one-time-tokens'
 import { createMember, createOrganization, TEST_PASSWORD, uniqueEmail, type TestOrganization } from '../helpers/factories'
 import { apiClient, sessionCookieFrom, signedInClient, type Api } from '../helpers/http'
 import { startTestServer, tokenFromLink, type TestServer } from '../helpers/server'
@@ -90,6 +92,22 @@ describe('invitations', () => {
     })
     expect(accept.status).toBe(404)
     expect(accept.body.error).toEqual({ code: 'not_found', message: 'Invitation not found' })
+  })
+
+  it('an expired invitation can be neither looked up nor accepted (404)', async () => {
+    const { token, tokenHash } = newOneTimeToken()
+    await server.db.insert(invitations).values({
+      organizationId: org.id,
+      email: uniqueEmail('expired'),
+      role: 'designer',
+      tokenHash,
+      invitedBy: org.owner.id,
+      expiresAt: new Date(Date.now() - 1000),
+    })
+    const anonymous = apiClient(server.baseUrl)
+    expect((await anonymous.get(`/api/invitations/lookup/${token}`)).status).toBe(404)
+    const accept = await anonymous.post('/api/invitations/accept', { token, name: 'Late Comer', password: 'a long password' })
+    expect(accept.status).toBe(404)
   })
 })
 
