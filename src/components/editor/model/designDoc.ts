@@ -100,10 +100,16 @@ export function createDesignMutations(doc: Y.Doc) {
   }
 
   return {
+    /** Adds parts (and conductors); loads and inverters among them run in every scenario. */
     addParts(newParts: Part[], newConductors: Conductor[] = []) {
       transact(() => {
         for (const part of newParts) parts.set(part.id, partToY(part))
         for (const conductor of newConductors) conductors.set(conductor.id, conductorToY(conductor))
+        const switchable = newParts.filter((p) => p.type === 'load' || p.type === 'inverter')
+        scenarios.forEach((scenario) => {
+          const loads = scenario.get('loads') as Y.Map<unknown>
+          for (const part of switchable) loads.set(part.id, { on: true, level: 1 })
+        })
       })
     },
     moveParts(positions: Record<string, { x: number; y: number }>) {

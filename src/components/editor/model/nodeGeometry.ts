@@ -8,6 +8,8 @@ export const GRID_PX = 16
 const PITCH_PX = 32
 const MIN_HEIGHT_PX = 80
 const NODE_WIDTH_PX = 144
+/** Width of one character of a 9.5 px terminal label, px (generous). */
+const LABEL_CHAR_PX = 6
 
 export interface PlacedTerminal extends TerminalInfo {
   /** Offset from the node's top-left corner, px. */
@@ -36,7 +38,10 @@ export function nodeGeometry(part: Pick<Part, 'type' | 'params'>): NodeGeometry 
   for (const term of terminals) bySide[term.side].push(term)
   const vertical = Math.max(bySide.left.length, bySide.right.length)
   const horizontal = Math.max(bySide.top.length, bySide.bottom.length)
-  const width = Math.max(NODE_WIDTH_PX, (horizontal + 1) * PITCH_PX)
+  // Room for the longest terminal labels on both sides plus the symbol and rating between them.
+  const longest = (list: TerminalInfo[]) => Math.max(0, ...list.map((t) => t.label.length))
+  const labelled = (longest(bySide.left) + longest(bySide.right)) * LABEL_CHAR_PX + 96
+  const width = Math.ceil(Math.max(NODE_WIDTH_PX, (horizontal + 1) * PITCH_PX, labelled) / GRID_PX) * GRID_PX
   // Terminals on the top or bottom edge carry labels inside the box: leave a row for them.
   const height = Math.max(MIN_HEIGHT_PX + (horizontal > 0 ? GRID_PX : 0), (vertical + 1) * PITCH_PX)
   const placed: PlacedTerminal[] = []
