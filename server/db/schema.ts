@@ -2,7 +2,10 @@
 // (`npx drizzle-kit generate`); never edit a generated migration by hand.
 import { sql } from 'drizzle-orm'
 import {
+  bigint,
+  bigserial,
   boolean,
+  customType,
   check,
   index,
   integer,
@@ -172,4 +175,60 @@ export const outboxMessages = pgTable(
     receivedAt: timestamp('received_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('outbox_received_idx').on(t.receivedAt)],
+)
+
+// ---- Live co-editing (server/collab): the Yjs state of each design ----
+
+/** PostgreSQL bytea as a Uint8Array (drizzle-orm 0.45 has no built-in bytea column). */
+const bytea = customType<{ data: Uint8Array; driverData: Buffer }>({
+  dataType: () => 'bytea',
+  toDriver: (value) => Buffer.from(value.buffer, value.byteOffset, value.byteLength),
+  fromDriver: (value) => new Uint8Array(value.buffer, value.byteOffset, value.byteLength),
+})
+
+/**
+ * The compacted Yjs state of a design: `state` holds every update up to design_updates.id
+ * `compactedThrough`; the design loads from it plus the later rows of design_updates. A design with no
+ * row here is still only the JSON in designs.document and is converted on first load.
+ */
+export const designStates = pgTable('design_states', {
+  projectId: uuid('project_id')
+    .primaryKey()
+    .references(() => projects.id, { onDelete: 'cascade' }),
+  state: bytea('state').notNull(),
+  compactedThrough: bigint('compacted_through', { mode: 'number' }).notNull().default(0),
+  updatedAt: updatedAt(),
+})
+
+/** The durable log: each Yjs update is committed here before the server applies or broadcasts it. */
+export const designUpdates = pgTable(
+  'design_updates',
+  {
+    id: bigserial('id', { mode: 'number' }).primaryKey(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    update: bytea('update').notNull(),
+    userId: uuid('user_id').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('design_updates_project_idx').on(t.projectId, t.id)],
+)
+
+/** Named revisions: a Yjs snapshot of the whole state plus the design JSON read from it. */
+export const designRevisions = pgTable(
+  'design_revisions',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    snapshot: bytea('snapshot').notNull(),
+    design: jsonb('design').notNull(),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    restoredFrom: uuid('restored_from'),
+  },
+  (t) => [index('design_revisions_project_idx').on(t.projectId, t.createdAt)],
 )
