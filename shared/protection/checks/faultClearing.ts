@@ -37,6 +37,8 @@ function faultCases(device: ProtectionDevice): Case[] {
     // A conductor rated at or above its short-circuit limit has no margin at all: withstand 0 s.
     const withstandS =
       initialC >= limit.finalC ? 0 : withstandTimeS({ ...conductor, currentA, initialC, finalC: limit.finalC })
+    // A current too small to give a finite adiabatic time (a vanishing fault) cannot damage the conductor.
+    if (!Number.isFinite(withstandS)) continue
     cases.push({ where, currentA, withstandS, clearS: band.maxClearS(currentA) })
   }
   return cases

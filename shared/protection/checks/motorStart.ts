@@ -71,7 +71,9 @@ function nextRatingThatRides(device: ProtectionDevice, pulse: Pulse, context: Re
 }
 
 function checkStart(device: ProtectionDevice, start: LoadStart, context: ResolvedContext): Finding | null {
-  if (!(start.runningCurrentA > 0) || !(start.inrushMultiple > 0) || !(start.startDurationS > 0)) return null
+  // Start data that are not finite positive numbers describe no pulse (the design schema rejects them).
+  const usable = [start.runningCurrentA, start.inrushMultiple, start.startDurationS].every((v) => Number.isFinite(v) && v > 0)
+  if (!usable) return null
   const band = deviceBand(device.familyId, device.ratingA)
   const startA = (device.baseCurrentA ?? 0) + start.inrushMultiple * start.runningCurrentA
   const minOpenS = band.minMeltS(startA)

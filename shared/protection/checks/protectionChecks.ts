@@ -1,6 +1,7 @@
 import { makeFinding } from '../../analysis/findings'
 import type { Finding } from '../../analysis/types'
 import { hasTimeCurrentModel } from '../timeCurrent'
+import { areaCmilOf } from '../withstand'
 import { partIdOf } from './_lib/chain'
 import { autoResetRule } from './autoReset'
 import { faultClearingRule } from './faultClearing'
@@ -26,10 +27,22 @@ function inputFinding(device: ProtectionDevice, message: string, scenarioId: str
   })
 }
 
+const isFiniteNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v)
+
 function problemWith(device: ProtectionDevice): string | null {
   if (!hasTimeCurrentModel(device.familyId)) return `${device.id}: no time-current model for device family "${device.familyId}".`
-  if (!(typeof device.ratingA === 'number' && Number.isFinite(device.ratingA) && device.ratingA > 0)) {
-    return `${device.id}: rating must be a positive number of amperes.`
+  if (!(isFiniteNumber(device.ratingA) && device.ratingA > 0)) {
+    return `${device.id}: ratingA must be a positive number of amperes.`
+  }
+  const c = device.conductor
+  if (c) {
+    if (!isFiniteNumber(c.insulationRatingC)) return `${device.id}: conductor.insulationRatingC must be a temperature in °C.`
+    if (c.operatingC !== undefined && !isFiniteNumber(c.operatingC)) return `${device.id}: conductor.operatingC must be a temperature in °C.`
+    try {
+      areaCmilOf(c)
+    } catch (error) {
+      return `${device.id}: conductor: ${(error as Error).message}`
+    }
   }
   return null
 }
