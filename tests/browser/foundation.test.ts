@@ -5,7 +5,7 @@ import os from 'node:os'
 import path from 'node:path'
 import { chromium, type BrowserContext, type Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { startTestServer, type TestServer } from '../helpers/server'
+import { startTestServer, tokenFromLink, type TestServer } from '../helpers/server'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
 const SHOTS = path.join(ROOT, '.data/test-output/screenshots')
@@ -166,6 +166,54 @@ describe('foundation in the browser', () => {
     const mail = await server.outbox.latestTo(`ines.${suffix}@tidewater.test`)
     expect(mail.text).toContain('/accept-invitation?token=')
     await shot('members')
+  })
+
+  it('lets the invited colleague join, then follows the role the owner gives them', async () => {
+    const invitee = `ines.${suffix}@tidewater.test`
+    const token = tokenFromLink(await server.outbox.latestTo(invitee), '/accept-invitation', server.baseUrl)
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-pw-'))
+    const other = await chromium.launchPersistentContext(dir, {
+      executablePath: '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS, viewport: { width: 1280, height: 720 },
+    })
+    try {
+      const colleague = other.pages()[0] ?? (await other.newPage())
+      colleague.on('pageerror', (err) => pageErrors.push(`colleague: ${err.message}`))
+      await colleague.goto(`${server.baseUrl}/accept-invitation?token=${encodeURIComponent(token)}`)
+      await poll(() => colleague.locator('main').textContent()).toContain(owner.organizationName)
+      await colleague.getByLabel('Your name').fill('Ines Varga')
+      await colleague.getByLabel('Choose a password').fill('fuse-holders-near-source')
+      await colleague.getByRole('button', { name: /^Join/ }).click()
+      await colleague.waitForURL(/\/projects$/)
+      // A designer (the invitation's role) may create projects and sees all of the organisation's.
+      await poll(() => colleague.getByRole('button', { name: 'New project' }).count()).toBeGreaterThan(0)
+      await poll(() => colleague.locator('[data-test="projects-table"] tbody tr.v-data-table__tr').count()).toBe(2)
+
+      // The owner makes her a reviewer; her next page load follows the new role.
+      await page.reload()
+      const roleSelect = page.getByRole('combobox', { name: 'Role of Ines Varga' })
+      await poll(() => roleSelect.count()).toBe(1)
+      await page.locator('.v-select', { has: roleSelect }).click()
+      await page.getByRole('option', { name: /Reviewer/ }).click()
+      await poll(() => page.locator('.v-snackbar').last().textContent()).toContain('Ines Varga is now reviewer')
+      await colleague.reload()
+      await poll(() => colleague.locator('[data-test="projects-table"] tbody tr.v-data-table__tr').count()).toBe(2)
+      expect(await colleague.getByRole('button', { name: 'New project' }).count()).toBe(0)
+      await colleague.locator('[data-test="user-menu"]').click()
+      await poll(() => colleague.locator('[data-test="user-role"]').textContent()).toBe('Reviewer')
+
+      // Removing her ends her access at once.
+      await page.getByRole('button', { name: 'Remove Ines Varga' }).click()
+      await page.locator('[data-test="confirm"]').click()
+      await poll(() => page.locator('[data-test="members-table"]').textContent()).not.toContain('Ines Varga')
+      await colleague.goto(`${server.baseUrl}/projects`)
+      await colleague.waitForURL(/\/sign-in/)
+    } catch (err) {
+      await page.screenshot({ path: path.join(SHOTS, 'failure-owner.png') })
+      throw err
+    } finally {
+      await other.close()
+      fs.rmSync(dir, { recursive: true, force: true })
+    }
   })
 
   it('signs out and back in, returning to the projects', async () => {
