@@ -10,7 +10,8 @@ import { createApp } from '../../server/app'
 import { connectDatabase } from '../../server/db/client'
 import { createMailer } from '../../server/mail/mailer'
 import { SESSION_COOKIE, signSessionToken } from '../../server/security/session-token'
-import { createOrganization, TEST_PASSWORD, type TestOrganization } from '../helpers/factories'
+import { startSession } from '../../server/modules/auth/sessions'
+import { createOrganization, TEST_PASSWORD, uniqueEmail, type TestOrganization } from '../helpers/factories'
 import { apiClient, signedInClient } from '../helpers/http'
 import { startTestServer, type TestServer } from '../helpers/server'
 
@@ -105,6 +106,40 @@ describe('errors and headers', () => {
       expect(res.status).toBe(500)
       expect(res.body).toEqual({ error: { code: 'internal', message: 'Something went wrong on the server. Please try again.' } })
       expect(res.text).not.toMatch(/pool|at .*\.ts|Error:/i)
+    } finally {
+      console.error = originalError
+      mailer.close()
+    }
+  })
+})
+
+describe('when the mail relay is unreachable', () => {
+  it('an invitation is taken back with a clear 500; a reset request still answers 202', async () => {
+    const origin = 'http://mail-test.example'
+    const config = { ...server.config, allowedOrigins: [origin] }
+    // Port 9 (discard) on loopback: nothing listens there, so every send fails.
+    const mailer = createMailer({ host: '127.0.0.1', port: 9, user: undefined, pass: undefined, from: 'x@example.test' })
+    const app = createApp({ db: server.db, config, mailer })
+    const { token } = await startSession({ db: server.db, config }, { userId: org.owner.id, organizationId: org.id })
+    const originalError = console.error
+    console.error = () => {}
+    try {
+      const email = uniqueEmail('unsent')
+      const invite = await request(app)
+        .post('/api/invitations')
+        .set('Origin', origin)
+        .set('Cookie', `${SESSION_COOKIE}=${token}`)
+        .send({ email, role: 'designer' })
+      expect(invite.status).toBe(500)
+      expect(invite.body.error).toEqual({
+        code: 'internal',
+        message: 'The invitation e-mail could not be sent, so no invitation was made. Check the mail settings and try again.',
+      })
+      const pending = await request(app).get('/api/invitations').set('Cookie', `${SESSION_COOKIE}=${token}`)
+      expect(pending.body.map((i: { email: string }) => i.email)).not.toContain(email)
+
+      const reset = await request(app).post('/api/auth/password-reset/request').set('Origin', origin).send({ email: org.owner.email })
+      expect(reset.status).toBe(202)
     } finally {
       console.error = originalError
       mailer.close()

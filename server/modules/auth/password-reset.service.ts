@@ -20,7 +20,12 @@ export async function requestPasswordReset(deps: { db: Db; config: AppConfig; ma
   const { token, tokenHash } = newOneTimeToken()
   await insertPasswordReset(deps.db, { userId: user.id, tokenHash, expiresAt: new Date(Date.now() + RESET_TTL_MS) })
   const link = `${deps.config.publicUrl}/reset-password?token=${encodeURIComponent(token)}`
-  await deps.mailer.send(passwordResetMail({ to: user.email, name: user.name, link }))
+  try {
+    await deps.mailer.send(passwordResetMail({ to: user.email, name: user.name, link }))
+  } catch (error) {
+    // Logged, not reported: an error here would tell the caller that the account exists.
+    console.error('[mail] password-reset e-mail not sent:', error instanceof Error ? error.message : error)
+  }
 }
 
 export async function resetPassword(deps: { db: Db; config: AppConfig }, input: { token: string; password: string }) {

@@ -3,7 +3,7 @@ import type { Invitation, InvitationInput } from '../../../shared/api/members.sc
 import type { AppConfig } from '../../config'
 import type { Db } from '../../db/client'
 import type { Actor } from '../../http/actor'
-import { conflict, notFound } from '../../http/errors'
+import { conflict, HttpError, notFound } from '../../http/errors'
 import type { Mailer } from '../../mail/mailer'
 import { invitationMail } from '../../mail/messages'
 import { hashOneTimeToken, newOneTimeToken } from '../../security/one-time-tokens'
@@ -23,6 +23,7 @@ import {
 const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000
 
 export const ALREADY_REGISTERED = 'This e-mail address already has an Ampwright account'
+export const INVITATION_NOT_SENT = 'The invitation e-mail could not be sent, so no invitation was made. Check the mail settings and try again.'
 
 interface Deps {
   db: Db
@@ -58,16 +59,22 @@ export async function invite(
     return insertInvitation(tx, { ...input, organizationId: actor.organizationId, tokenHash, invitedBy: actor.userId, expiresAt })
   })
   const link = `${deps.config.publicUrl}/accept-invitation?token=${encodeURIComponent(token)}`
-  await deps.mailer.send(
-    invitationMail({
-      to: input.email,
-      organizationName: actor.organizationName,
-      inviterName: actor.name,
-      role: input.role,
-      link,
-      expiresAt,
-    }),
-  )
+  const mail = invitationMail({
+    to: input.email,
+    organizationName: actor.organizationName,
+    inviterName: actor.name,
+    role: input.role,
+    link,
+    expiresAt,
+  })
+  try {
+    await deps.mailer.send(mail)
+  } catch (error) {
+    // Nobody can accept an invitation whose link never arrived: take it back and say so.
+    console.error('[mail] invitation e-mail not sent:', error instanceof Error ? error.message : error)
+    await deleteOpenInvitation(deps.db, actor.organizationId, id)
+    throw new HttpError(500, 'internal', INVITATION_NOT_SENT)
+  }
   const row = await findInvitation(deps.db, actor.organizationId, id)
   if (!row) throw notFound('Invitation')
   return toInvitation(row)
