@@ -9,6 +9,30 @@ export const CAUTION =
   'Caution: these results are design aids. The installer remains responsible; local codes, the authority having ' +
   'jurisdiction and licensed practice prevail.'
 
+/** PV strings above this open-circuit voltage get a shock-hazard caution (common practice: 60 V DC is
+ * the usual upper bound of touch-safe extra-low voltage in dry locations). */
+export const PV_CAUTION_ABOVE_V = 60
+
+/** The cautions a design calls for: always the general one, plus lithium and high-voltage PV notes. */
+export function designCautions(design: Design): string[] {
+  const cautions = [CAUTION]
+  if (design.parts.some((p) => p.type === 'battery' && (p.params.chemistry === 'lfp' || p.params.chemistry === 'nmc'))) {
+    cautions.push('Lithium batteries: their fault current can exceed what common fuses interrupt; follow the battery ' +
+      "maker's instructions for its BMS, main fuse, charging limits and installation.")
+  }
+  for (const p of design.parts) {
+    if (p.type !== 'pv-array') continue
+    // Coefficient method (NEC 690.7; standards.md §6): N × Voc × (1 + β/100 × (Tmin − 25 °C)).
+    const p1 = p.params
+    const vocMaxV = p1.modulesPerString * p1.moduleVocV * (1 + (p1.vocTempCoeffPctPerC / 100) * (p1.recordLowC - 25))
+    if (vocMaxV > PV_CAUTION_ABOVE_V) {
+      cautions.push(`High-voltage PV: ${p.label || p.id} can reach ${vocMaxV.toFixed(0)} V DC open circuit on a cold morning; ` +
+        'treat its wiring as a shock hazard and use PV-rated disconnects and fuses.')
+    }
+  }
+  return cautions
+}
+
 const SEVERITY_ORDER: Record<Severity, number> = { error: 0, warning: 1, info: 2 }
 
 export function countBySeverity(findings: readonly Finding[]): Record<Severity, number> {
@@ -61,7 +85,7 @@ export function formatReport(design: Design, result: AnalysisResult, source: str
       ]),
     ))
   }
-  lines.push('', CAUTION)
+  lines.push('', ...designCautions(design))
   return lines.join('\n')
 }
 
@@ -74,5 +98,6 @@ export function reportAsJson(design: Design, result: AnalysisResult, source: str
       counts: countBySeverity(result.findings.filter((f) => f.scenarioId === s.id)) })),
     findings: sortFindings(result.findings),
     caution: CAUTION,
+    cautions: designCautions(design),
   }
 }
