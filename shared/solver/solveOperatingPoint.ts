@@ -34,7 +34,7 @@ export interface OperatingPointOptions {
  * solveOperatingPoint({ nodeCount: 2, elements: [
  *   { kind: 'vsource', id: 'bat', pos: 1, neg: 0, voltageV: 12, resistanceOhm: 0.01 },
  *   { kind: 'resistor', id: 'load', a: 1, b: 0, resistanceOhm: 1.19 },
- * ] }).elementCurrentA // Float64Array [10, 10]
+ * ] }).elementCurrentA // ≈ Float64Array [10, 10]
  */
 export function solveOperatingPoint(circuit: Circuit, options: OperatingPointOptions = {}): OperatingPoint {
   const shapeError = circuitShapeError(circuit)
