@@ -3,6 +3,10 @@ import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { createFactor, ldlNumeric, ldlSolve, ldlSymbolic } from '../../../shared/solver/_lib/ldl'
 import { minimumDegreeOrder } from '../../../shared/solver/_lib/minimumDegree'
+import { buildNodalSystem } from '../../../shared/solver/_lib/nodalSystem'
+import { prepareNetwork } from '../../../shared/solver/_lib/prepareNetwork'
+import type { CircuitElement } from '../../../shared/solver/circuit'
+import { radialCircuit } from '../../helpers/radialCircuit'
 
 function denseSolve(a: number[][], b: number[]): number[] {
   const n = b.length
@@ -99,5 +103,32 @@ describe('sparse LDLᵀ on a minimum-degree order', () => {
       ),
       { numRuns: 200 },
     )
+  })
+})
+
+describe('fill on radial networks (why the cost grows about linearly)', () => {
+  it('a random tree of conductors factors with no fill at all: nnz(L) = branches between unknowns', () => {
+    fc.assert(
+      fc.property(fc.array(fc.nat(), { minLength: 1, maxLength: 200 }), (parents) => {
+        // Node k + 1 hangs from a random earlier node; node 0 is the battery negative (reference).
+        const n = parents.length + 1
+        const elements: CircuitElement[] = [{ kind: 'vsource', id: 'bat', pos: 1 % n, neg: 0, voltageV: 12, resistanceOhm: 0.01 }]
+        parents.forEach((p, k) => elements.push({ kind: 'resistor', id: `w${k}`, a: p % (k + 1), b: k + 1, resistanceOhm: 0.01 }))
+        const prepared = prepareNetwork({ nodeCount: n, elements }, () => true)
+        const system = buildNodalSystem(n, elements, prepared.active, prepared.isUnknown)
+        const branchesBetweenUnknowns = parents.filter((p, k) => p % (k + 1) !== 0).length
+        expect(system.factor.symbolic.lp[system.n]).toBe(branchesBetweenUnknowns)
+      }),
+      { numRuns: 200 },
+    )
+  })
+
+  it('generated radial systems with meshed returns keep nnz(L) within 3 × the node count', () => {
+    for (const loads of [100, 1000, 5000]) {
+      const circuit = radialCircuit({ loads, seed: 3 })
+      const prepared = prepareNetwork(circuit, (el) => el.kind !== 'isource')
+      const system = buildNodalSystem(circuit.nodeCount, circuit.elements, prepared.active, prepared.isUnknown)
+      expect(system.factor.symbolic.lp[system.n]).toBeLessThan(3 * circuit.nodeCount)
+    }
   })
 })
