@@ -1,5 +1,6 @@
 import type { Conductor, Design, PartOf } from '../design/schema'
-import { pvArraysByController, type PreparedDesign } from './compileCircuit'
+import type { PreparedDesign } from './compileCircuit'
+import { buildPassiveCircuit } from './_lib/passiveCircuit'
 import { conductorStats } from './_lib/conductorStats'
 import { deviceStats } from './_lib/deviceStats'
 import { protectiveDevices } from './_lib/devices'
@@ -8,7 +9,6 @@ import { finite } from './_lib/finite'
 import { loadDrops } from './_lib/loadDrops'
 import { solveScenario, type ScenarioSolve } from './_lib/solveScenario'
 import { buildTerminalNodes } from './_lib/terminalNodes'
-import { UnionFind } from './_lib/unionFind'
 import { makeFinding, mergeFindings } from './findings'
 import { protectionTopology } from './protectionTopology'
 import { RULES } from './rules'
@@ -45,7 +45,7 @@ export function analyzeDesign(design: Design, options: AnalyzeOptions = {}): Ana
 function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
   const nodes = buildTerminalNodes(design)
   const devices = protectiveDevices(design)
-  const prepared: PreparedDesign = { nodes, devices }
+  const prepared: PreparedDesign = { nodes, devices, passive: buildPassiveCircuit(design, nodes, devices) }
   const topology = protectionTopology(design, nodes, devices)
   const findings: Finding[] = []
 
@@ -67,7 +67,7 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
       conductorsAt.set(partId, list)
     }
   }
-  const pvGroups = buildPvGroups(design, prepared)
+  const pvGroups = buildPvGroups(design, prepared.passive!.arraysOfController)
   const faults = faultStudy(design, prepared, topology)
   const conductors = conductorStats(design, solves, topology, faults.conductorFarEndA, pvGroups, devices)
   const deviceList = deviceStats(design, devices, solves, topology, faults.deviceFaultA, pvGroups, conductorsAt, conductors)
@@ -104,21 +104,7 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
 }
 
 /** Each charge controller with the arrays wired to its PV input. */
-function buildPvGroups(design: Design, prepared: PreparedDesign): PvGroup[] {
-  const { nodes, devices } = prepared
-  const series = new UnionFind(nodes.nodeCount)
-  const node = (partId: string, terminal: string) => nodes.nodeOf.get(`${partId}:${terminal}`)
-  for (const c of design.conductors) {
-    const a = node(c.from.partId, c.from.terminal)
-    const b = node(c.to.partId, c.to.terminal)
-    if (a !== undefined && b !== undefined) series.union(a, b)
-  }
-  for (const d of devices) {
-    const a = node(d.partId, d.lineTerminal)
-    const b = node(d.partId, d.loadTerminal)
-    if (a !== undefined && b !== undefined) series.union(a, b)
-  }
-  const byController = pvArraysByController(design, nodes, series)
+function buildPvGroups(design: Design, byController: Map<string, PartOf<'pv-array'>[]>): PvGroup[] {
   return design.parts
     .filter((p): p is PartOf<'charge-controller'> => p.type === 'charge-controller')
     .map((controller) => ({ controller, arrays: byController.get(controller.id) ?? [] }))

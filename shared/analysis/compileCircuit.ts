@@ -1,12 +1,10 @@
 
 import type { Design, Part, PartOf, Scenario } from '../design/schema'
 import type { Circuit, CircuitElement } from '../solver/circuit'
-import { conductorOhm } from './_lib/conductorFigures'
 import { protectiveDevices, type ProtectiveDevice } from './_lib/devices'
 import { finite } from './_lib/finite'
-import { batteryThevenin } from './_lib/sourceModels'
+import { buildPassiveCircuit, type PassiveCircuit } from './_lib/passiveCircuit'
 import { buildTerminalNodes, terminalKey, type TerminalNodes } from './_lib/terminalNodes'
-import { UnionFind } from './_lib/unionFind'
 
 /** Who an element stands for: a part (and which of its elements) or a conductor. */
 export interface ElementOwner {
@@ -42,6 +40,7 @@ export interface CompiledCircuit {
 export interface PreparedDesign {
   nodes: TerminalNodes
   devices: ProtectiveDevice[]
+  passive?: PassiveCircuit
 }
 
 /** A scenario with nothing running and no charging: the circuit of batteries and wiring only. */
@@ -65,73 +64,23 @@ export const FAULT_STUDY_SCENARIO: Scenario = { id: '__fault__', name: 'Fault st
 export function compileCircuit(design: Design, scenario: Scenario, prepared?: PreparedDesign): CompiledCircuit {
   const nodes = prepared?.nodes ?? buildTerminalNodes(design)
   const devices = prepared?.devices ?? protectiveDevices(design)
+  const base = prepared?.passive ?? buildPassiveCircuit(design, nodes, devices)
   const nominalV = design.settings.nominalVoltageV
   const minVoltageV = 0.5 * nominalV // constant-power loads turn resistive below half voltage (ZIP-load practice)
-  const elements: CircuitElement[] = []
-  const owners: ElementOwner[] = []
-  const conductorElement = new Map<string, number>()
-  const partElement = new Map<string, number>()
-  const problems: CompileProblem[] = []
-  const batteryNegNodes: number[] = []
+  // The wiring, devices and banks are the same in every scenario: copy them, then add what runs.
+  const elements: CircuitElement[] = base.elements.slice()
+  const owners: ElementOwner[] = base.owners.slice()
+  const partElement = new Map(base.partElement)
+  const problems: CompileProblem[] = base.problems.slice()
+  const { conductorElement, deviceElement, batteryNegNodes, arraysOfController } = base
   const node = (partId: string, terminal: string) => nodes.nodeOf.get(terminalKey(partId, terminal))
   const add = (el: CircuitElement, owner: ElementOwner) => {
     elements.push(el)
     owners.push(owner)
     return elements.length - 1
   }
-
-  // Series paths (conductors and closed devices): the positive-path groups find PV arrays' controllers.
-  const series = new UnionFind(nodes.nodeCount)
-  for (const c of design.conductors) {
-    const a = node(c.from.partId, c.from.terminal)
-    const b = node(c.to.partId, c.to.terminal)
-    const r = conductorOhm(c, design.settings)
-    if (a === undefined || b === undefined || r === null) {
-      problems.push({ kind: 'bad-conductor', message: `Conductor ${c.label || c.id} has an unknown terminal or an unusable size/length`, partIds: [], conductorIds: [c.id] })
-      continue
-    }
-    conductorElement.set(c.id, add({ kind: 'resistor', id: `c:${c.id}`, a, b, resistanceOhm: r }, { kind: 'conductor', id: c.id, role: 'main' }))
-    series.union(a, b)
-  }
-  const deviceElement = new Map<string, number>()
-  for (const d of devices) {
-    const a = node(d.partId, d.lineTerminal)
-    const b = node(d.partId, d.loadTerminal)
-    if (!d.closed || a === undefined || b === undefined) continue
-    const role = d.kind === 'panel-way' ? d.id.slice(d.partId.length + 1) : 'main'
-    const i = add({ kind: 'resistor', id: `p:${d.id}`, a, b, resistanceOhm: Math.max(d.resistanceOhm, 1e-6) }, { kind: 'part', id: d.partId, role })
-    if (role === 'main') partElement.set(d.partId, i)
-    deviceElement.set(d.id, i)
-    series.union(a, b)
-  }
-  for (const part of design.parts) {
-    if (part.type === 'battery-switch' && part.params.closed) addSeries(part, 'a', 'b', part.params.resistanceOhm)
-    if (part.type === 'shunt') addSeries(part, 'battery', 'system', part.params.resistanceOhm)
-  }
-  function addSeries(part: Part, ta: string, tb: string, ohm: number) {
-    const a = node(part.id, ta)
-    const b = node(part.id, tb)
-    if (a === undefined || b === undefined) return
-    partElement.set(part.id, add({ kind: 'resistor', id: `p:${part.id}`, a, b, resistanceOhm: Math.max(ohm, 1e-6) }, { kind: 'part', id: part.id, role: 'main' }))
-    series.union(a, b)
-  }
-
-  // Batteries, and which nodes a battery can reach (its two terminals joined through the bank).
-  const supplied = new UnionFind(nodes.nodeCount)
-  for (const el of elements) if (el.kind === 'resistor') supplied.union(el.a, el.b)
-  const hasBattery = new Uint8Array(nodes.nodeCount)
-  for (const part of design.parts) {
-    if (part.type !== 'battery') continue
-    const pos = node(part.id, 'pos')
-    const neg = node(part.id, 'neg')
-    if (pos === undefined || neg === undefined) continue
-    const { emfV, resistanceOhm } = batteryThevenin(part.params)
-    partElement.set(part.id, add({ kind: 'vsource', id: `p:${part.id}`, pos, neg, voltageV: emfV, resistanceOhm }, { kind: 'part', id: part.id, role: 'main' }))
-    supplied.union(pos, neg)
-    batteryNegNodes.push(neg)
-  }
-  for (const n of batteryNegNodes) hasBattery[supplied.find(n)] = 1
-  const canSupply = (...ns: (number | undefined)[]) => ns.every((n) => n !== undefined && hasBattery[supplied.find(n)] === 1)
+  const sameSupply = (a: number, b: number) => base.suppliedRoot[a] === base.suppliedRoot[b]
+  const canSupply = (...ns: (number | undefined)[]) => ns.every((n) => n !== undefined && base.hasBattery[base.suppliedRoot[n]] === 1)
   const noSupply = (part: Part) =>
     problems.push({ kind: 'no-supply', message: `${part.label || part.id} is on in this scenario but no battery can supply it`, partIds: [part.id], conductorIds: [] })
 
@@ -139,7 +88,6 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
     const s = scenario.loads[id]
     return s && s.on && s.level > 0 ? s.level : 0
   }
-  const arraysOfController = pvArraysByController(design, nodes, series)
 
   for (const part of design.parts) {
     const main = { kind: 'part' as const, id: part.id, role: 'main' }
@@ -193,7 +141,7 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
         if (!scenario.sunOn) break
         const arrays = arraysOfController.get(part.id) ?? []
         const ns = ['pv-pos', 'pv-neg', 'bat-pos', 'bat-neg'].map((t) => node(part.id, t))
-        const wired = arrays.filter((a) => { const neg = node(a.id, 'neg'); return neg !== undefined && supplied.find(neg) === supplied.find(ns[1]!) })
+        const wired = arrays.filter((a) => { const neg = node(a.id, 'neg'); return neg !== undefined && ns[1] !== undefined && sameSupply(neg, ns[1]) })
         if (wired.length === 0) break
         // The PV input is fed by the arrays; the battery side (and the common negative) needs a bank.
         if (!canSupply(ns[1], ns[2], ns[3])) { noSupply(part); break }
@@ -233,24 +181,4 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
   }
 }
 
-/** PV arrays whose positive reaches a controller's PV input through conductors and closed devices. */
-export function pvArraysByController(design: Design, nodes: TerminalNodes, series: UnionFind): Map<string, PartOf<'pv-array'>[]> {
-  const controllerOfGroup = new Map<number, string>()
-  for (const part of design.parts) {
-    if (part.type !== 'charge-controller') continue
-    const pv = nodes.nodeOf.get(terminalKey(part.id, 'pv-pos'))
-    if (pv !== undefined && !controllerOfGroup.has(series.find(pv))) controllerOfGroup.set(series.find(pv), part.id)
-  }
-  const result = new Map<string, PartOf<'pv-array'>[]>()
-  for (const part of design.parts) {
-    if (part.type !== 'pv-array') continue
-    const pos = nodes.nodeOf.get(terminalKey(part.id, 'pos'))
-    const controller = pos === undefined ? undefined : controllerOfGroup.get(series.find(pos))
-    if (!controller) continue
-    const list = result.get(controller) ?? []
-    list.push(part)
-    result.set(controller, list)
-  }
-  return result
-}
-
+export { pvArraysByController } from './_lib/passiveCircuit'

@@ -106,29 +106,41 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
   const fromArray = walk(graph, n, edgeLen, sheathed, arrays.map((p) => nodeOf(p.id, 'pos')), arrays.map((p) => p.id))
 
   const conductors = new Map<string, ConductorProtection>()
-  design.conductors.forEach((c, i) => {
+  for (let i = 0; i < design.conductors.length; i++) {
+    const c = design.conductors[i]
     const ends = conductorEnds[i]
-    const base = { conductorId: c.id, upstreamNode: ends.a, downstreamNode: ends.b }
-    if (!ends.positive || ends.a < 0 || ends.b < 0) {
-      conductors.set(c.id, { ...base, polarity: 'negative', side: 'none', protectingDeviceId: null, protectedFrom: null, deviceDistanceM: null, runSheathed: false, downstreamDeviceId: null, downstreamRunM: null, sourcePartId: null })
-      return
+    const w = !ends.positive || ends.a < 0 || ends.b < 0 ? null
+      : fromBattery.reached(ends.a) || fromBattery.reached(ends.b) ? fromBattery
+        : fromArray.reached(ends.a) || fromArray.reached(ends.b) ? fromArray : null
+    const record: ConductorProtection = {
+      conductorId: c.id, polarity: ends.positive && ends.a >= 0 && ends.b >= 0 ? 'positive' : 'negative', side: 'none',
+      upstreamNode: ends.a, downstreamNode: ends.b, protectingDeviceId: null, protectedFrom: null, deviceDistanceM: null,
+      runSheathed: false, downstreamDeviceId: null, downstreamRunM: null, sourcePartId: null,
     }
-    const w = fromBattery.reached(ends.a) || fromBattery.reached(ends.b) ? fromBattery : fromArray.reached(ends.a) || fromArray.reached(ends.b) ? fromArray : null
-    if (!w) {
-      conductors.set(c.id, { ...base, polarity: 'positive', side: 'none', protectingDeviceId: null, protectedFrom: null, deviceDistanceM: null, runSheathed: false, downstreamDeviceId: null, downstreamRunM: null, sourcePartId: null })
-      return
+    conductors.set(c.id, record)
+    if (!w) continue
+    const u = w.dist[ends.a] <= w.dist[ends.b] ? ends.a : ends.b
+    const v = u === ends.a ? ends.b : ends.a
+    record.side = w === fromBattery ? 'battery' : 'pv'
+    record.upstreamNode = u
+    record.downstreamNode = v
+    record.sourcePartId = w.sourceId(u)
+    const below = w.downDevice[v]
+    if (below >= 0) {
+      record.downstreamDeviceId = devices[below].id
+      record.downstreamRunM = Math.max(0, w.downRunM[v] - w.dist[u])
     }
-    const [u, v] = w.dist[ends.a] <= w.dist[ends.b] ? [ends.a, ends.b] : [ends.b, ends.a]
     const upstream = w.device[u]
-    const below = w.downDevice[v] >= 0 ? { downstreamDeviceId: devices[w.downDevice[v]].id, downstreamRunM: Math.max(0, w.downRunM[v] - w.dist[u]) } : { downstreamDeviceId: null, downstreamRunM: null }
-    const protection =
-      upstream >= 0
-        ? { protectingDeviceId: devices[upstream].id, protectedFrom: 'upstream' as const, deviceDistanceM: null, runSheathed: false }
-        : w.downDevice[v] >= 0
-          ? { protectingDeviceId: devices[w.downDevice[v]].id, protectedFrom: 'downstream' as const, deviceDistanceM: w.downRunM[v], runSheathed: w.downSheathed[v] === 1 }
-          : { protectingDeviceId: null, protectedFrom: null, deviceDistanceM: null, runSheathed: false }
-    conductors.set(c.id, { ...base, upstreamNode: u, downstreamNode: v, polarity: 'positive', side: w === fromBattery ? 'battery' : 'pv', ...protection, ...below, sourcePartId: w.sourceId(u) })
-  })
+    if (upstream >= 0) {
+      record.protectingDeviceId = devices[upstream].id
+      record.protectedFrom = 'upstream'
+    } else if (below >= 0) {
+      record.protectingDeviceId = devices[below].id
+      record.protectedFrom = 'downstream'
+      record.deviceDistanceM = w.downRunM[v]
+      record.runSheathed = w.downSheathed[v] === 1
+    }
+  }
 
   const deviceTopology = new Map<string, DeviceTopology>()
   devices.forEach((d, i) => {
@@ -158,8 +170,10 @@ function buildGraph(n: number, a: number[], b: number[], conductor: number[], de
   const cond = new Int32Array(2 * m)
   const dev = new Int32Array(2 * m)
   for (let e = 0; e < m; e++) {
-    for (const [h, from, target] of [[2 * e, a[e], b[e]], [2 * e + 1, b[e], a[e]]] as const) {
-      to[h] = target
+    for (let side = 0; side < 2; side++) {
+      const h = 2 * e + side
+      const from = side === 0 ? a[e] : b[e]
+      to[h] = side === 0 ? b[e] : a[e]
       cond[h] = conductor[e]
       dev[h] = device[e]
       next[h] = head[from]

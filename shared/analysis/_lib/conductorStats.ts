@@ -8,8 +8,20 @@ import type { ScenarioSolve } from './solveScenario'
 import { conductorOhm, conductorTemperatureC } from './conductorFigures'
 import { finite } from './finite'
 
+type AmpacityFigure = { result: AmpacityResult | null; source: string }
+
 /** Ampacity of a conductor under the design's profile; null (with the reason) when the tables refuse it. */
-export function ampacityOf(c: Conductor, design: Design, circuitVoltageV: number): { result: AmpacityResult | null; source: string } {
+export function ampacityOf(c: Conductor, design: Design, circuitVoltageV: number, memo?: Map<string, AmpacityFigure>): AmpacityFigure {
+  // Most conductors of a design share size, insulation and installation: look each combination up once.
+  const key = memo ? `${c.sizeId}|${c.material}|${c.insulationRatingC}|${c.ambientC ?? ''}|${c.installation}|${c.bundledCount}|${circuitVoltageV}` : ''
+  const seen = memo?.get(key)
+  if (seen) return seen
+  const figure = ampacityUncached(c, design, circuitVoltageV)
+  memo?.set(key, figure)
+  return figure
+}
+
+function ampacityUncached(c: Conductor, design: Design, circuitVoltageV: number): AmpacityFigure {
   try {
     const result = conductorAmpacityA({
       sizeId: c.sizeId, material: c.material, insulationRatingC: c.insulationRatingC,
@@ -35,6 +47,8 @@ export function conductorStats(
   for (const g of pvGroups) for (const a of g.arrays) groupOfArray.set(a.id, g)
   const arrayById = new Map(pvGroups.flatMap((g) => g.arrays.map((a) => [a.id, a] as const)))
   const controllerGroup = new Map(pvGroups.map((g) => [g.controller.id, g]))
+  const ampacityMemo = new Map<string, AmpacityFigure>()
+  const ocpdMemo = new Map<string, number>()
 
   return design.conductors.map((c, i) => {
     let maxCurrentA = 0
@@ -51,8 +65,8 @@ export function conductorStats(
     const tapped = topology.conductors.get(c.id)!
     const pv = pvRole(c, tapped.side === 'pv' ? tapped.sourcePartId : null, arrayById, groupOfArray, controllerGroup)
     const circuitVoltageV = pv ? Math.max(nominalV, ...pv.arrays.map((a) => a.params.moduleVocV * a.params.modulesPerString)) : nominalV
-    const { result, source } = ampacityOf(c, design, circuitVoltageV)
-    const protection = branchProtection(c, tapped, result?.ampacityA ?? null, design, deviceById)
+    const { result, source } = ampacityOf(c, design, circuitVoltageV, ampacityMemo)
+    const protection = branchProtection(c, tapped, result?.ampacityA ?? null, design, deviceById, ocpdMemo)
     return {
       conductor: c, maxCurrentA: finite(maxCurrentA), maxScenarioId, steadyCurrentA: finite(steadyCurrentA), steadyScenarioId, ampacity: result,
       ampacityA: result?.ampacityA ?? null, ampacitySource: source, ambientC: conductorTemperatureC(c, design.settings),
@@ -90,12 +104,18 @@ function pvRole(
  */
 function branchProtection(
   c: Conductor, p: ConductorProtection, ampacityA: number | null, design: Design, deviceById: Map<string, ProtectiveDevice>,
+  memo: Map<string, number>,
 ): ConductorProtection {
   if (p.protectedFrom !== 'upstream' || ampacityA === null || !p.protectingDeviceId || !p.downstreamDeviceId || p.downstreamRunM === null) return p
   const upstream = deviceById.get(p.protectingDeviceId)
   const own = deviceById.get(p.downstreamDeviceId)
   if (!upstream || !own) return p
-  const allowed = (family: string) => maxDeviceRating(c, ampacityA, design.settings.profile, family)?.maxRatingA ?? 0
+  const allowed = (family: string) => {
+    const key = `${c.sizeId}|${c.material}|${ampacityA}|${family}`
+    let value = memo.get(key)
+    if (value === undefined) memo.set(key, (value = maxDeviceRating(c, ampacityA, design.settings.profile, family)?.maxRatingA ?? 0))
+    return value
+  }
   if (upstream.ratingA <= allowed(upstream.family) + 1e-9) return p
   const limitM = c.sheathed ? BRANCH_DISTANCE_LIMITS.sheathedM : BRANCH_DISTANCE_LIMITS.bareM
   if (p.downstreamRunM > limitM + 1e-9 || own.ratingA > allowed(own.family) + 1e-9) return p
