@@ -3,6 +3,7 @@ import fs from 'node:fs'
 import path from 'node:path'
 import cookieParser from 'cookie-parser'
 import express, { type Express } from 'express'
+import { createDocumentHub, type DocumentHub } from './collab/documentHub'
 import type { AppConfig } from './config'
 import type { Db } from './db/client'
 import { createRequireSession } from './http/auth'
@@ -22,9 +23,11 @@ export interface AppDeps {
   db: Db
   config: AppConfig
   mailer: Mailer
+  /** Shared with the /collab WebSocket endpoint (attachCollabServer); created here when absent. */
+  hub?: DocumentHub
 }
 
-export function createApp({ db, config, mailer }: AppDeps): Express {
+export function createApp({ db, config, mailer, hub = createDocumentHub({ db }) }: AppDeps): Express {
   const app = express()
   app.disable('x-powered-by')
   app.set('query parser', 'simple')
@@ -33,7 +36,7 @@ export function createApp({ db, config, mailer }: AppDeps): Express {
     next()
   })
 
-  const deps: RouteDeps = { db, config, mailer, requireSession: createRequireSession({ db, config }) }
+  const deps: RouteDeps = { db, config, mailer, hub, requireSession: createRequireSession({ db, config }) }
   const api = express.Router()
   api.use(express.json({ limit: config.jsonBodyLimit }))
   api.use(cookieParser())

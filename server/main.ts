@@ -4,6 +4,8 @@ import fs from 'node:fs'
 import http from 'node:http'
 import path from 'node:path'
 import { createApp } from './app'
+import { attachCollabServer } from './collab/collabServer'
+import { createDocumentHub } from './collab/documentHub'
 import { loadConfig } from './config'
 import { connectDatabase } from './db/client'
 import { prepareDatabase } from './db/prepare'
@@ -42,8 +44,10 @@ async function main(): Promise<void> {
   if (!fs.existsSync(path.join(config.clientDir, 'index.html'))) {
     console.warn('[server] no client build in dist/: run `npx vite build` (npm start does) to get the app')
   }
-  const app = createApp({ db: database.db, config, mailer })
+  const hub = createDocumentHub({ db: database.db })
+  const app = createApp({ db: database.db, config, mailer, hub })
   const server = http.createServer(app)
+  const collab = attachCollabServer(server, { db: database.db, config, hub })
   try {
     await listen(server, config.port, config.host)
   } catch (error) {
@@ -76,7 +80,10 @@ async function main(): Promise<void> {
     console.log(`\n[server] ${signal}: shutting down`)
     const force = setTimeout(() => process.exit(1), 10_000)
     force.unref()
+    // Live editors first: their queued updates are stored and compacted before the pool ends.
+    const collabClosed = collab.close().catch((error: unknown) => console.error('[collab] close failed:', error))
     server.close(async () => {
+      await collabClosed
       mailer.close()
       await fakeSmtp?.close()
       await database.close()

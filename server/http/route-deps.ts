@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express'
 import type { AppConfig } from '../config'
+import type { DocumentHub } from '../collab/documentHub'
 import type { Db } from '../db/client'
 import type { Mailer } from '../mail/mailer'
 
@@ -9,4 +10,6 @@ export interface RouteDeps {
   config: AppConfig
   mailer: Mailer
   requireSession: RequestHandler
+  /** Open designs: every change to a design's Yjs state goes through its room. */
+  hub: DocumentHub
 }

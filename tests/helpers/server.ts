@@ -6,6 +6,8 @@ import type { AddressInfo } from 'node:net'
 import { desc, sql } from 'drizzle-orm'
 import type { Express } from 'express'
 import { createApp } from '../../server/app'
+import { attachCollabServer, type CollabServer } from '../../server/collab/collabServer'
+import { createDocumentHub, type DocumentHub } from '../../server/collab/documentHub'
 import { loadConfig, type AppConfig } from '../../server/config'
 import { connectDatabase, type Db } from '../../server/db/client'
 import { outboxMessages } from '../../server/db/schema'
@@ -18,6 +20,9 @@ export interface TestServer {
   db: Db
   config: AppConfig
   outbox: Outbox
+  /** The open designs and the /collab WebSocket endpoint on the same HTTP server. */
+  hub: DocumentHub
+  collab: CollabServer
   close(): Promise<void>
 }
 
@@ -44,7 +49,7 @@ export function tokenFromLink(mail: CapturedMail, path: string, baseUrl: string)
 }
 
 export async function startTestServer(
-  options: { serveClient?: boolean; config?: Partial<AppConfig> } = {},
+  options: { serveClient?: boolean; config?: Partial<AppConfig>; compactEvery?: number } = {},
 ): Promise<TestServer> {
   const databaseUrl = process.env.DATABASE_URL
   if (!databaseUrl) throw new Error('DATABASE_URL must name the (prepared) test database')
@@ -67,8 +72,10 @@ export async function startTestServer(
     { serveClient: options.serveClient ?? false, ...options.config },
   )
   const mailer = createMailer({ ...config.smtp, host: '127.0.0.1', port: fakeSmtp.port })
-  const app = createApp({ db: database.db, config, mailer })
+  const hub = createDocumentHub({ db: database.db, options: options.compactEvery ? { compactEvery: options.compactEvery } : {} })
+  const app = createApp({ db: database.db, config, mailer, hub })
   server.on('request', app)
+  const collab = attachCollabServer(server, { db: database.db, config, hub })
 
   const outbox: Outbox = {
     async messagesTo(email) {
@@ -91,7 +98,10 @@ export async function startTestServer(
     db: database.db,
     config,
     outbox,
+    hub,
+    collab,
     async close() {
+      await collab.close()
       server.closeAllConnections()
       await new Promise<void>((resolve) => server.close(() => resolve()))
       mailer.close()

@@ -26,7 +26,7 @@ export function designsRoutes(deps: RouteDeps): Router {
   const saveInput = validate({ params, body: saveBody })
   router.put('/', requirePermission('design.write'), saveInput, async (req, res) => {
     const { params: p, body } = saveInput.data(req)
-    res.json(await saveDesign(db, actorOf(req), { projectId: p.id, baseRevision: body.baseRevision, document: body.design }))
+    res.json(await saveDesign(deps, actorOf(req), { projectId: p.id, baseRevision: body.baseRevision, document: body.design }))
   })
 
   return router

@@ -11,9 +11,9 @@ import type { DbOrTx, Db } from '../../db/client'
 import type { Actor } from '../../http/actor'
 import { invalidRequest, notFound } from '../../http/errors'
 import { emptyDesignFor } from '../designs/design-document'
+import { readStoredDesign } from '../designs/design-state'
 import {
   deleteProject,
-  findDesignDocument,
   findVisibleProject,
   insertProjectWithDesign,
   listVisibleProjects,
@@ -94,7 +94,8 @@ export async function duplicateProject(db: Db, actor: Actor, projectId: string) 
       nominalVoltageV: source.nominalVoltageV,
       notes: source.notes,
     }
-    const document = (await findDesignDocument(tx, projectId)) ?? emptyDesignFor(values)
+    // The stored Yjs state (what live editors see), not the JSON copy refreshed only at compaction.
+    const document = (await readStoredDesign(tx, projectId))?.design ?? emptyDesignFor(values)
     return insertProjectWithDesign(tx, { organizationId: actor.organizationId, createdBy: actor.userId, values, document })
   })
   return getProject(db, actor, id)

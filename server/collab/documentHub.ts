@@ -1,0 +1,84 @@
+// The open designs of this process. Every change to a design's Yjs state — a peer's edit, a saved JSON
+// design, a restored revision — goes through its room, so the one ordered queue guards each design.
+// (One server process per database: two processes would each hold their own room.)
+import type { Db } from '../db/client'
+import { DesignRoom, type RoomOptions } from './designRoom'
+import { loadDesignDoc } from './loadDesignDoc'
+
+export const DEFAULT_ROOM_OPTIONS: RoomOptions = { compactEvery: 200 }
+
+export interface DocumentHub {
+  /** Opens (or joins) the design's room; undefined if the project has no design. Pair with release(). */
+  acquire(projectId: string): Promise<DesignRoom | undefined>
+  /** The last holder leaving compacts the log and closes the room. */
+  release(room: DesignRoom): void
+  /** acquire → fn → release. */
+  withRoom<T>(projectId: string, fn: (room: DesignRoom) => Promise<T>): Promise<T | undefined>
+  /** Open rooms (for tests and the shutdown). */
+  openRooms(): number
+  /** Waits for queued writes and compacts every open room. */
+  close(): Promise<void>
+}
+
+export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions> }): DocumentHub {
+  const options = { ...DEFAULT_ROOM_OPTIONS, ...deps.options }
+  const rooms = new Map<string, { opening: Promise<DesignRoom | undefined>; room?: DesignRoom }>()
+
+  async function acquire(projectId: string): Promise<DesignRoom | undefined> {
+    for (;;) {
+      let entry = rooms.get(projectId)
+      if (!entry) {
+        const created: { opening: Promise<DesignRoom | undefined>; room?: DesignRoom } = {
+          opening: loadDesignDoc(deps.db, projectId, { storeConversion: true }).then((loaded) => {
+            if (!loaded) return undefined
+            created.room = new DesignRoom(projectId, deps.db, loaded, options)
+            return created.room
+          }),
+        }
+        entry = created
+        rooms.set(projectId, created)
+        // A failed or empty load must not stick: the next caller tries again.
+        const forget = () => {
+          if (rooms.get(projectId) === created && !created.room) rooms.delete(projectId)
+        }
+        created.opening.then(forget, forget)
+      }
+      const room = await entry.opening
+      if (!room) return undefined
+      if (room.closed) continue
+      room.refs++
+      return room
+    }
+  }
+
+  function release(room: DesignRoom): void {
+    room.refs--
+    if (room.refs > 0) return
+    void room.compact().then(() => {
+      if (room.refs > 0 || room.closed) return
+      room.destroy()
+      if (rooms.get(room.projectId)?.room === room) rooms.delete(room.projectId)
+    })
+  }
+
+  return {
+    acquire,
+    release,
+    async withRoom(projectId, fn) {
+      const room = await acquire(projectId)
+      if (!room) return undefined
+      try {
+        return await fn(room)
+      } finally {
+        release(room)
+      }
+    },
+    openRooms: () => rooms.size,
+    async close() {
+      const open = await Promise.all([...rooms.values()].map((entry) => entry.opening.catch(() => undefined)))
+      await Promise.all(open.map((room) => room?.compact()))
+      for (const room of open) if (room && !room.closed) room.destroy()
+      rooms.clear()
+    },
+  }
+}
