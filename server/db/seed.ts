@@ -2,7 +2,7 @@
 // client. Inserted once (skipped when the demo owner exists), so restarts keep what people changed.
 import { sql } from 'drizzle-orm'
 import type { Role } from '../../shared/api/roles'
-import { emptyDesignFor } from '../modules/designs/design-document'
+import { createDemoDesign } from '../../shared/design/demo'
 import { findUserByEmail, insertMember, insertOrganization } from '../modules/auth/users.repository'
 import { insertProjectWithDesign } from '../modules/projects/projects.repository'
 import { insertShare } from '../modules/projects/project-shares.repository'
@@ -50,7 +50,7 @@ export async function seedDemoData(db: Db, options: { bcryptCost: number }): Pro
       organizationId: organization.id,
       createdBy: owner.id,
       values: DEMO_PROJECT,
-      document: emptyDesignFor(DEMO_PROJECT),
+      document: { ...createDemoDesign(), name: DEMO_PROJECT.name },
     })
     await insertShare(tx, projectId, client.id)
     return true
