@@ -84,7 +84,7 @@ export function toSpiceNetlist(circuit: Circuit, options: SpiceNetlistOptions): 
   for (let e = 0; e < circuit.elements.length; e++) {
     const element = circuit.elements[e]
     if (!prepared.used[e]) {
-      lines.push(`* left out (invalid): ${comment(String(element?.id))}`)
+      lines.push(`* left out (invalid, or no current can flow): ${comment(String(element?.id))}`)
       continue
     }
     lines.push(...elementLines(element, e))

@@ -37,7 +37,9 @@ export function prepareNetwork(circuit: Circuit, include: (element: CircuitEleme
   for (let e = 0; e < elements.length; e++) {
     if (!valid[e] || !include(elements[e])) continue
     used[e] = 1
-    if (elements[e].kind !== 'isource') conducts[e] = 1
+    // A current source, or a 0 W load (I = 0 at any voltage), joins nothing electrically.
+    const element = elements[e]
+    if (element.kind !== 'isource' && !(element.kind === 'cpower' && element.powerW === 0)) conducts[e] = 1
   }
   const islandMap = findIslands(nodeCount, elements, conducts)
   const { islands, islandOfNode } = islandMap
@@ -48,7 +50,7 @@ export function prepareNetwork(circuit: Circuit, include: (element: CircuitEleme
     if (!used[e] || conducts[e]) continue
     if (islandOfNode[firstNode(elements[e])] !== islandOfNode[secondNode(elements[e])]) {
       used[e] = 0
-      bridging.push(elements[e].id)
+      if (elements[e].kind === 'isource') bridging.push(elements[e].id)
     }
   }
   if (bridging.length) {

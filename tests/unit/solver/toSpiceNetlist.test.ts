@@ -38,7 +38,7 @@ describe('toSpiceNetlist', () => {
     expect(lines).toContain('* node n0: battery ?') // comments stay ASCII
     expect(lines).toContain('VGND0 n0 0 DC 0')
     expect(lines).toContain('VGND1 n3 0 DC 0') // the floating "spare" island
-    expect(deck).toContain('* left out (invalid): bad')
+    expect(deck).toContain('* left out (invalid, or no current can flow): bad')
     expect(deck).not.toMatch(/^R6 /m)
   })
 
