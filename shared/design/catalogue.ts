@@ -1,4 +1,5 @@
 import type { z } from 'zod'
+import { describeField, type FieldInfo } from './fields'
 import * as P from './params'
 import type { DesignSettings, PartType } from './schema'
 
@@ -182,4 +183,24 @@ export function partTerminals(part: { type: PartType; params: unknown }): Termin
     return info.terminals.filter((term) => !term.id.startsWith('out') || Number(term.id.slice(3)) <= ways)
   }
   return info.terminals
+}
+
+export type ParamField = FieldInfo & { key: string }
+
+/** The parameters of a part type in form order, with label, unit, limits and choices for each. */
+export function paramFields(type: PartType): ParamField[] {
+  const shape = (PART_CATALOGUE[type]?.paramsSchema as unknown as { shape: Record<string, z.ZodType> } | undefined)?.shape ?? {}
+  return Object.entries(shape).flatMap(([key, schema]) => {
+    const info = describeField(schema)
+    return info ? [{ key, ...info }] : []
+  })
+}
+
+export const PART_GROUP_LABELS: Record<PartGroup, string> = {
+  sources: 'Sources',
+  storage: 'Storage',
+  conversion: 'Conversion',
+  distribution: 'Distribution',
+  protection: 'Protection',
+  loads: 'Loads',
 }

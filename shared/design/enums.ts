@@ -8,9 +8,13 @@ import { DEVICE_FAMILY_IDS } from '../protection/ratings'
 
 export const conductorSizeIdSchema = z.enum(CONDUCTOR_SIZE_IDS, {
   error: 'Choose a conductor size such as awg-10 or mm2-16',
-})
+}).meta({ label: 'Size', kind: 'choice', options: CONDUCTOR_SIZE_IDS })
 
-export const materialSchema = z.enum(MATERIAL_IDS, { error: 'Choose copper, tinned-copper or aluminium' })
+export const materialSchema = z
+  .enum(MATERIAL_IDS, { error: 'Choose copper, tinned-copper or aluminium' })
+  .meta({ label: 'Material', kind: 'choice', options: MATERIAL_IDS })
 
 /** Protective-device families (fuse and breaker kinds) as defined in shared/protection. */
-export const deviceFamilySchema = z.enum(DEVICE_FAMILY_IDS, { error: `Choose a protective-device family: ${DEVICE_FAMILY_IDS.join(', ')}` })
+export const deviceFamilySchema = z
+  .enum(DEVICE_FAMILY_IDS, { error: `Choose a protective-device family: ${DEVICE_FAMILY_IDS.join(', ')}` })
+  .meta({ label: 'Device family', kind: 'choice', options: DEVICE_FAMILY_IDS })

@@ -58,7 +58,7 @@ export const chargeControllerParamsSchema = z.object({
   maxPvCurrentA: quantity('maximum PV input current', 'A', { min: 1, max: 300 }),
   outputCurrentA: quantity('rated charge current', 'A', { min: 1, max: 300 }),
   efficiency,
-  mppt: flag('it tracks maximum power (MPPT)'),
+  mppt: flag('MPPT', 'it tracks maximum power (MPPT)'),
 })
 
 export const dcDcChargerParamsSchema = z.object({
@@ -103,11 +103,12 @@ export const fusePanelParamsSchema = z
     wayRatingsA: z
       .array(quantity('way fuse rating', 'A', { min: 0.5, max: 100 }), { error: 'Enter the fuse rating of each way' })
       .min(1, 'Enter the fuse rating of each way')
-      .max(FUSE_PANEL_MAX_WAYS, `A panel has at most ${FUSE_PANEL_MAX_WAYS} ways`),
+      .max(FUSE_PANEL_MAX_WAYS, `A panel has at most ${FUSE_PANEL_MAX_WAYS} ways`)
+      .meta({ label: 'Way fuse ratings', kind: 'list', unit: 'A' }),
     family: deviceFamilySchema,
     dcVoltageRatingV: quantity('way fuse DC voltage rating', 'V', { min: 1, max: 1500 }),
     interruptingRatingA: quantity('way fuse interrupting rating', 'A', { min: 1, max: 500000 }),
-    ignitionProtected: flag('the panel is ignition protected'),
+    ignitionProtected: flag('Ignition protected', 'the panel is ignition protected'),
     resistanceOhm: contactResistanceOhm,
   })
   .superRefine((p, ctx) => {
@@ -121,17 +122,17 @@ const protectiveDeviceShape = {
   ratingA: quantity('rating', 'A', { min: 0.5, max: 1000 }),
   dcVoltageRatingV: quantity('DC voltage rating', 'V', { min: 1, max: 1500 }),
   interruptingRatingA: quantity('interrupting rating', 'A', { min: 1, max: 500000 }),
-  ignitionProtected: flag('it is ignition protected'),
-  closed: flag('it is closed (not blown or tripped)').default(true),
+  ignitionProtected: flag('Ignition protected', 'it is ignition protected'),
+  closed: flag('Closed (not blown or tripped)', 'it is closed (not blown or tripped)').default(true),
   resistanceOhm: contactResistanceOhm,
 }
 export const fuseParamsSchema = z.object(protectiveDeviceShape)
 export const breakerParamsSchema = z.object(protectiveDeviceShape)
 
 export const batterySwitchParamsSchema = z.object({
-  closed: flag('the switch is on').default(true),
+  closed: flag('On', 'the switch is on').default(true),
   ratingA: quantity('continuous rating', 'A', { min: 1, max: 2000 }),
-  ignitionProtected: flag('it is ignition protected'),
+  ignitionProtected: flag('Ignition protected', 'it is ignition protected'),
   resistanceOhm: contactResistanceOhm,
 })
 
@@ -150,13 +151,14 @@ export const loadParamsSchema = z
     resistanceOhm: quantity('resistance', 'Ω', { min: 0.001, max: 1e6 }).optional(),
     duty: choice('duty', ['continuous', 'intermittent'] as const),
     /** Critical loads are held to the 3 % voltage-drop limit (ABYC E-11; ISO 10133). */
-    critical: flag('the load is critical (3 % drop limit)'),
+    critical: flag('Critical (3 % drop limit)', 'the load is critical (3 % drop limit)'),
     hoursPerDay: quantity('hours per day', 'h', { min: 0, max: 24 }),
     start: z
       .object({
         inrushMultiple: quantity('inrush multiple', '×', { min: 1, max: 30 }),
         durationS: quantity('inrush duration', 's', { min: 0.001, max: 30 }),
       })
+      .meta({ label: 'Motor start', kind: 'group' })
       .optional(),
   })
   .superRefine((p, ctx) => {

@@ -97,22 +97,22 @@ export const conductorSchema = z.object({
   ambientC: quantity('ambient temperature', '°C', { min: -40, max: 120 }).nullable().default(null),
   colour: labelText('colour', 30).optional(),
   /** Sheathed or in conduit for its whole length (allows the longer protection distances). */
-  sheathed: flag('it is sheathed or in conduit for its whole length').default(false),
+  sheathed: flag('Sheathed or in conduit', 'it is sheathed or in conduit for its whole length').default(false),
 })
 
 export const scenarioLoadSchema = z.object({
-  on: flag('the load runs in this scenario'),
+  on: flag('On', 'the load runs in this scenario'),
   level: quantity('load level', '', { min: 0, max: 1 }).default(1),
 })
 
 export const scenarioSchema = z.object({
   id: idSchema,
   name: labelText('scenario name').min(1, 'Enter the scenario name'),
-  sunOn: flag('the sun is on the array').default(false),
-  chargerOn: flag('mains charging is available').default(false),
+  sunOn: flag('Sun on the arrays', 'the sun is on the array').default(false),
+  chargerOn: flag('Mains charging available', 'mains charging is available').default(false),
   /** Keyed by load, inverter or charger part id (see crossref.ts); parts not listed are off. */
   loads: z.record(z.string(), scenarioLoadSchema, { error: 'List loads as an object keyed by part id' }).default({}),
-  motorStart: flag('motor loads are starting').optional(),
+  motorStart: flag('Motor start', 'motor loads are starting').optional(),
 })
 
 export const designSchema = z.object({
