@@ -45,15 +45,31 @@ export function generatedDesign(targetParts: number): Design {
   ]
   const loads: Record<string, { on: boolean; level: number }> = {}
   const branches = Math.max(4, Math.round((targetParts - 4) / 2.6)) // per branch: fuse + load, plus a bus pair per 4 branches
-  const feeders = 4
+  // Feeders and bus chains both grow as √n so the distribution stays a few tens of buses deep.
+  const feeders = Math.max(1, Math.ceil(Math.sqrt(branches / 4)))
   const perFeeder = Math.ceil(branches / feeders)
   let branch = 0
+  let mainBus = 'mainbus'
+  let mainNeg = 'mainneg'
   for (let f = 0; f < feeders && branch < branches; f++) {
+    const stud = 'bcde'[f % 4]
+    if (f > 0 && f % 4 === 0) {
+      // Next main bus pair in the chain, fed from the previous one's last stud.
+      const nextBus = `mainbus${f}`
+      const nextNeg = `mainneg${f}`
+      parts.push(makePart(settings, 'bus-bar', nextBus, `Main bus ${f}`, at), makePart(settings, 'bus-bar', nextNeg, `Main negative ${f}`, at, { polarity: 'negative' }))
+      conductors.push(
+        makeConductor(`${nextBus}in`, `${nextBus} feed`, `${mainBus}.f`, `${nextBus}.a`, 'awg-4/0', 0.2),
+        makeConductor(`${nextNeg}out`, `${nextNeg} return`, `${nextNeg}.a`, `${mainNeg}.f`, 'awg-4/0', 0.2),
+      )
+      mainBus = nextBus
+      mainNeg = nextNeg
+    }
     const feederFuse = `ff${f}`
     parts.push(makePart(settings, 'fuse', feederFuse, `Feeder ${f}`, at, { family: 'class-t', ratingA: 150, interruptingRatingA: 20000, dcVoltageRatingV: 125 }))
-    conductors.push(makeConductor(`ffin${f}`, `Feeder ${f} tap`, `mainbus.${'bcde'[f]}`, `${feederFuse}.line`, 'awg-2/0', 0.1))
+    conductors.push(makeConductor(`ffin${f}`, `Feeder ${f} tap`, `${mainBus}.${stud}`, `${feederFuse}.line`, 'awg-2/0', 0.1))
     let previousPos = `${feederFuse}.load`
-    let previousNeg = `mainneg.${'bcde'[f]}`
+    let previousNeg = `${mainNeg}.${stud}`
     for (let g = 0; g * 4 < perFeeder && branch < branches; g++) {
       const bus = `b${f}_${g}`
       const neg = `n${f}_${g}`

@@ -47,10 +47,8 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
     if (k >= 0 && !refSet[k]) { refV[k] = finite(v[neg] ?? 0); refSet[k] = 1 }
   }
   const terminals: Record<string, number> = {}
-  for (const [key, n] of compiled.nodes.nodeOf) {
-    const k = islandOf[n]
-    terminals[key] = finite((v[n] ?? 0) - (k >= 0 ? refV[k] : 0))
-  }
+  const referenced = (n: number | undefined) => (n === undefined ? 0 : finite((v[n] ?? 0) - (islandOf[n] >= 0 ? refV[islandOf[n]] : 0)))
+  for (const [key, n] of compiled.nodes.nodeOf) terminals[key] = referenced(n)
 
   const conductorCurrentA = new Float64Array(design.conductors.length)
   const conductors = design.conductors.map((c, i) => {
@@ -62,7 +60,7 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
     const dropV = el.kind === 'resistor' ? Math.abs(currentA) * el.resistanceOhm : 0
     return {
       id: c.id, currentA, dropV: finite(dropV), dropPercent: finite((100 * dropV) / nominalV),
-      fromV: terminals[`${c.from.partId}:${c.from.terminal}`] ?? 0, toV: terminals[`${c.to.partId}:${c.to.terminal}`] ?? 0,
+      fromV: referenced(el.kind === 'resistor' ? el.a : undefined), toV: referenced(el.kind === 'resistor' ? el.b : undefined),
     }
   })
 

@@ -105,3 +105,19 @@ describe('finding ids and the merged list', () => {
     expect(result.findings.map((f) => f.ruleId)).toContain('unknown-scenario')
   })
 })
+
+describe('scenario results', () => {
+  it('report terminal voltages from the bank negative, conductor drops and part currents', () => {
+    // 8 A constant current from a 12.8 V, 4 mΩ bank: terminal voltage 12.8 − 8 × 0.004 = 12.768 V.
+    const result = analyzeDesign(simpleBranch())
+    const s = result.scenarios[0]
+    expect(s.terminals['bank:neg']).toBe(0)
+    expect(s.terminals['bank:pos']).toBeCloseTo(12.768, 9)
+    const pos = s.conductors.find((c) => c.id === 'pos')!
+    expect(pos.currentA).toBeCloseTo(8, 9)
+    expect(pos.fromV - pos.toV).toBeCloseTo(pos.dropV, 9)
+    expect(pos.dropPercent).toBeCloseTo((100 * pos.dropV) / 12, 9)
+    expect(s.parts.find((p) => p.id === 'bank')).toMatchObject({ currentA: expect.closeTo(8, 9), voltageV: expect.closeTo(12.768, 9) })
+    expect(result.devices).toEqual([expect.objectContaining({ id: 'fuse', ratingA: 15, protectsConductorIds: ['feed', 'pos'] })])
+  })
+})
