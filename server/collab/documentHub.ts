@@ -14,8 +14,8 @@ export interface DocumentHub {
   release(room: DesignRoom): void
   /** acquire → fn → release. */
   withRoom<T>(projectId: string, fn: (room: DesignRoom) => Promise<T>): Promise<T | undefined>
-  /** Open rooms (for tests and the shutdown). */
-  openRooms(): number
+  /** Whether the design's room is open (loading or loaded). */
+  isOpen(projectId: string): boolean
   /** Waits for queued writes and compacts every open room. */
   close(): Promise<void>
 }
@@ -73,7 +73,7 @@ export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>
         release(room)
       }
     },
-    openRooms: () => rooms.size,
+    isOpen: (projectId) => rooms.has(projectId),
     async close() {
       const open = await Promise.all([...rooms.values()].map((entry) => entry.opening.catch(() => undefined)))
       await Promise.all(open.map((room) => room?.compact()))
