@@ -75,3 +75,28 @@ describe('compileCircuit', () => {
     expect(out).toMatchObject({ kind: 'cpower', powerW: -188.1 })
   })
 })
+
+describe('compileCircuit: DC-DC charger', () => {
+  it('draws I_out × V_nominal ÷ η from its input and pushes I_out into its output', () => {
+    const design = designOf({
+      parts: [
+        part('battery', 'start', { nominalVoltageV: 12.8 }), part('battery', 'house', { nominalVoltageV: 12.8 }),
+        part('dc-dc-charger', 'dcdc', { outputCurrentA: 20, efficiency: 0.9, inputMinV: 11 }),
+      ],
+      conductors: [
+        wire('in-p', 'start.pos', 'dcdc.in-pos', 'awg-8', 1), wire('in-n', 'dcdc.in-neg', 'start.neg', 'awg-8', 1),
+        wire('out-p', 'dcdc.out-pos', 'house.pos', 'awg-8', 1), wire('out-n', 'dcdc.out-neg', 'house.neg', 'awg-8', 1),
+      ],
+      scenarios: [{ id: 'drive', name: 'Driving', sunOn: false, chargerOn: false, loads: { dcdc: { on: true, level: 1 } } }],
+    })
+    const compiled = compileCircuit(design, design.scenarios[0])
+    const input = compiled.circuit.elements.find((e) => e.id === 'p:dcdc#in')
+    // 20 A × 12 V ÷ 0.9 = 266.67 W
+    expect(input).toMatchObject({ kind: 'cpower', minVoltageV: 11 })
+    expect((input as { powerW: number }).powerW).toBeCloseTo(266.667, 3)
+    const op = solveOperatingPoint(compiled.circuit)
+    expect(op.status).toBe('ok')
+    // out-p runs from the charger's output to the house bank: +20 A in its from → to direction.
+    expect(op.elementCurrentA[compiled.conductorElement.get('out-p')!]).toBeCloseTo(20, 9)
+  })
+})

@@ -96,3 +96,17 @@ describe('pv-string-fuses (NEC 690.9(A), worked example in standards.md §6)', (
     expect(f.suggestion?.patch?.value).toBe(15)
   })
 })
+
+describe('device-voltage-rating on the PV side (NEC 690.7)', () => {
+  // 3 × 37 V × [1 + 0.0027 × 35] = 111 × 1.0945 = 121.4895 V at −10 °C: a 32 V blade fuse in the array circuit cannot break it.
+  it('flags a 32 V fuse between the array and the controller', () => {
+    const design = solar({})
+    const weak = { ...design, parts: design.parts.map((p) => (p.id === 'pv-fuse' ? ({ ...p, params: { ...p.params, dcVoltageRatingV: 32 } } as typeof p) : p)) }
+    const f = findingsOf(weak, 'device-voltage-rating').find((x) => x.partIds.includes('pv-fuse'))!
+    expect(f.measured!.value).toBeCloseTo(121.4895, 3)
+    expect(f.limit).toEqual({ value: 32, unit: 'V' })
+  })
+  it('passes the 1000 V PV fuse', () => {
+    expect(findingsOf(solar({}), 'device-voltage-rating')).toEqual([])
+  })
+})
