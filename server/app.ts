@@ -14,6 +14,8 @@ import type { Mailer } from './mail/mailer'
 import { createAnalyzeRouter } from './modules/analyze/analyze.routes'
 import { authRoutes } from './modules/auth/auth.routes'
 import { designsRoutes } from './modules/designs/designs.routes'
+import { designImportRoutes } from './modules/exports/designImport.routes'
+import { exportsRoutes } from './modules/exports/exports.routes'
 import { invitationsRoutes } from './modules/invitations/invitations.routes'
 import { membersRoutes } from './modules/members/members.routes'
 import { outboxRoutes } from './modules/outbox/outbox.routes'
@@ -49,7 +51,9 @@ export function createApp({ db, config, mailer, hub = createDocumentHub({ db }) 
     res.json({ ok: true })
   })
   api.use('/auth', authRoutes(deps))
+  api.use('/projects/:id/design/import', designImportRoutes(deps))
   api.use('/projects/:id/design', designsRoutes(deps))
+  api.use('/projects/:id/exports', exportsRoutes(deps))
   api.use('/projects', projectsRoutes(deps))
   api.use('/members', membersRoutes(deps))
   api.use('/invitations', invitationsRoutes(deps))
