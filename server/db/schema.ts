@@ -232,3 +232,66 @@ export const designRevisions = pgTable(
   },
   (t) => [index('design_revisions_project_idx').on(t.projectId, t.createdAt)],
 )
+
+// ---- Client deliverables (server/modules/{shares,uploads}) ----
+
+/** Read-only share links: the token (32 random bytes, base64url) is shown once; only its SHA-256 is kept. */
+export const shareLinks = pgTable(
+  'share_links',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    label: text('label').notNull().default(''),
+    /** SHA-256 (hex) of the token. */
+    tokenHash: text('token_hash').notNull().unique(),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    revokedAt: timestamp('revoked_at', { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('share_links_project_idx').on(t.projectId)],
+)
+
+/** A client's sign-off of a design revision, given through a share link. */
+export const approvals = pgTable(
+  'approvals',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    shareLinkId: uuid('share_link_id').references(() => shareLinks.id, { onDelete: 'set null' }),
+    name: text('name').notNull(),
+    /** A named revision (design_revisions.id) when one was chosen. */
+    revisionId: uuid('revision_id'),
+    /** The revision as the client saw it: a named revision's name, or "Saved revision N". */
+    revisionName: text('revision_name').notNull(),
+    /** The design's saved revision number at the time of approval. */
+    designRevision: integer('design_revision').notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index('approvals_project_idx').on(t.projectId, t.createdAt)],
+)
+
+/** Files of a project (datasheets, photos) kept in object storage; this row is their metadata. */
+export const attachments = pgTable(
+  'attachments',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    /** A part id inside the design document, when the file belongs to one part. */
+    partId: text('part_id'),
+    filename: text('filename').notNull(),
+    contentType: text('content_type').notNull(),
+    size: integer('size').notNull(),
+    sha256: text('sha256').notNull(),
+    storageKey: text('storage_key').notNull().unique(),
+    uploadedBy: uuid('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('attachments_project_idx').on(t.projectId, t.createdAt)],
+)
