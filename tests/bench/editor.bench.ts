@@ -1,0 +1,185 @@
+// Editor benchmark in headless Debian chromium against the real server and the built client, on a
+// generated design of about 500 parts: (1) time from committing a parameter edit in the side form
+// to the updated findings on screen, (2) frames per second while panning the drawing by mouse.
+// Prints both; asserts nothing. Uses its own database (ampwright_bench, recreated each run).
+import { execFileSync } from 'node:child_process'
+import fs from 'node:fs'
+import os from 'node:os'
+import path from 'node:path'
+import { chromium, type Page } from 'playwright-core'
+import { makeConductor, makePart } from '../../shared/design/builder'
+import { createEmptyDesign } from '../../shared/design/demo'
+import type { Conductor, Design, Part } from '../../shared/design/schema'
+
+const ROOT = path.resolve(import.meta.dirname, '../..')
+const GROUPS = 50 // 10 parts per group → 500, plus the bank and its main fuse
+
+/** Bank → main fuse → a chain of positive buses, each feeding four fused loads that return to a
+ * negative bus of its own; the negative buses are chained back to the bank. */
+export function generateDesign(groups = GROUPS): Design {
+  const design = createEmptyDesign({ name: 'Generated 500-part system', nominalVoltageV: 24, profile: 'vehicle' })
+  const s = design.settings
+  const parts: Part[] = [makePart(s, 'battery', 'bank', 'Bank', { x: 0, y: 0 }, { capacityAh: 200, parallelCount: 4 }),
+    makePart(s, 'fuse', 'main', 'Main fuse', { x: 224, y: 0 }, { family: 'class-t', ratingA: 400, interruptingRatingA: 20000, dcVoltageRatingV: 125 })]
+  const conductors: Conductor[] = [makeConductor('w-main', 'Main', 'bank.pos', 'main.line', 'awg-4/0', 0.5)]
+  const loads: Design['scenarios'][number]['loads'] = {}
+  let previousPos = 'main.load'
+  let previousNeg = 'bank.neg'
+  for (let g = 0; g < groups; g++) {
+    const x = 480 + (g % 10) * 1100
+    const y = Math.floor(g / 10) * 720
+    const pos = `pbus-${g}`
+    const neg = `nbus-${g}`
+    parts.push(makePart(s, 'bus-bar', pos, `Bus + ${g + 1}`, { x, y }, { polarity: 'positive', ratingA: 600 }))
+    parts.push(makePart(s, 'bus-bar', neg, `Bus − ${g + 1}`, { x, y: y + 560 }, { polarity: 'negative', ratingA: 600 }))
+    conductors.push(makeConductor(`wp-${g}`, `P${g + 1}`, previousPos, `${pos}.a`, 'awg-4/0', 0.3))
+    conductors.push(makeConductor(`wn-${g}`, `N${g + 1}`, previousNeg, `${neg}.a`, 'awg-4/0', 0.3))
+    previousPos = `${pos}.b`
+    previousNeg = `${neg}.b`
+    ;['c', 'd', 'e', 'f'].forEach((stud, k) => {
+      const fuse = `fuse-${g}-${k}`
+      const load = `load-${g}-${k}`
+      parts.push(makePart(s, 'fuse', fuse, `Branch fuse ${g + 1}.${k + 1}`, { x: x + 240 * k, y: y + 160 }, { ratingA: 15 }))
+      parts.push(makePart(s, 'load', load, `Load ${g + 1}.${k + 1}`, { x: x + 240 * k, y: y + 336 }, { model: 'power', powerW: 60 }))
+      conductors.push(makeConductor(`wf-${g}-${k}`, `F${g + 1}.${k + 1}`, `${pos}.${stud}`, `${fuse}.line`, 'awg-10', 1))
+      conductors.push(makeConductor(`wl-${g}-${k}`, `L${g + 1}.${k + 1}`, `${fuse}.load`, `${load}.pos`, 'awg-10', 3))
+      conductors.push(makeConductor(`wr-${g}-${k}`, `R${g + 1}.${k + 1}`, `${load}.neg`, `${neg}.${stud}`, 'awg-10', 3))
+      loads[load] = { on: true, level: 1 }
+    })
+  }
+  design.parts = parts
+  design.conductors = conductors
+  design.scenarios = [{ id: 'all-on', name: 'All loads on', sunOn: false, chargerOn: false, loads }]
+  return design
+}
+
+function benchDatabaseUrl(): { databaseUrl: string; adminUrl: string } {
+  const envFile = path.join(ROOT, '.data/env')
+  const vars: Record<string, string> = {}
+  if (fs.existsSync(envFile)) {
+    for (const m of fs.readFileSync(envFile, 'utf8').matchAll(/^export (\w+)=(?:\$\{\w+:-)?([^}\n]+)\}?$/gm)) vars[m[1]] = m[2]
+  }
+  const adminUrl = process.env.PG_ADMIN_URL ?? vars.PG_ADMIN_URL
+  const base = process.env.DATABASE_URL ?? vars.DATABASE_URL
+  if (!adminUrl || !base) throw new Error('no database settings: run `bash scripts/setup.sh` first')
+  return { databaseUrl: `${base.slice(0, base.lastIndexOf('/'))}/ampwright_bench`, adminUrl }
+}
+
+const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]
+
+// The in-page parts are plain script text: they run in the browser (DOM), not under Node's types.
+
+/** Commits `value` in the side form's rating field and resolves with ms until the findings show
+ * (or stop showing) a "will open" finding for `label`, measured to the next painted frame. */
+async function timeEdit(page: Page, label: string, value: string, expectFinding: boolean): Promise<number> {
+  await page.evaluate(`
+    window.__editMs = new Promise((resolve) => {
+      let t0 = 0
+      const shown = () => [...document.querySelectorAll('.findings-table tbody tr')]
+        .some((r) => r.textContent.includes(${JSON.stringify(label)}) && r.textContent.includes('open'))
+      document.addEventListener('keydown', (e) => { if (e.key === 'Enter') t0 = performance.now() }, { capture: true, once: true })
+      const observer = new MutationObserver(() => {
+        if (!(t0 > 0 && shown() === ${expectFinding})) return
+        observer.disconnect()
+        requestAnimationFrame(() => resolve(performance.now() - t0))
+      })
+      observer.observe(document.querySelector('.bottom-panel'), { subtree: true, childList: true, characterData: true })
+    })`)
+  const input = page.locator('.inspector [data-field="ratingA"] input')
+  await input.fill(value)
+  await input.press('Enter')
+  return (await page.evaluate('window.__editMs')) as number
+}
+
+/** Drags the background for `durationMs` and counts animation frames meanwhile. */
+async function panFps(page: Page, durationMs: number): Promise<number> {
+  const box = (await page.locator('.editor-canvas').boundingBox())!
+  const start = (await page.evaluate(`(() => {
+    const b = ${JSON.stringify(box)}
+    for (let y = b.y + 20; y < b.y + b.height - 20; y += 12)
+      for (let x = b.x + 20; x < b.x + b.width - 150; x += 12)
+        if (document.elementFromPoint(x, y)?.classList.contains('vue-flow__pane')) return { x, y }
+    return null
+  })()`)) as { x: number; y: number } | null
+  if (!start) return Number.NaN
+  await page.evaluate(`(() => {
+    window.__frames = 0
+    window.__counting = true
+    const tick = () => { window.__frames++; if (window.__counting) requestAnimationFrame(tick) }
+    requestAnimationFrame(tick)
+  })()`)
+  const t0 = Date.now()
+  await page.mouse.move(start.x, start.y)
+  await page.mouse.down()
+  let k = 0
+  while (Date.now() - t0 < durationMs) {
+    k++
+    await page.mouse.move(start.x + 120 * Math.sin(k / 10), start.y + 80 * Math.cos(k / 13))
+  }
+  await page.mouse.up()
+  const elapsed = Date.now() - t0
+  const frames = (await page.evaluate('(() => { window.__counting = false; return window.__frames })()')) as number
+  return (frames * 1000) / elapsed
+}
+
+export async function run(): Promise<void> {
+  if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' })
+  const { databaseUrl, adminUrl } = benchDatabaseUrl()
+  process.env.DATABASE_URL = databaseUrl
+  process.env.PG_ADMIN_URL = adminUrl
+  execFileSync('npx', ['tsx', 'server/db/prepare.ts', '--fresh'], { cwd: ROOT, stdio: 'ignore', env: process.env })
+  const { startTestServer } = await import('../helpers/server')
+  const server = await startTestServer({ serveClient: true })
+  const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-bench-'))
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-sync'],
+    viewport: { width: 1440, height: 900 },
+  })
+  try {
+    const page = context.pages()[0] ?? (await context.newPage())
+    const origin = server.baseUrl
+    const call = async (method: 'post' | 'get' | 'put', url: string, data?: unknown) => {
+      const res = await page.request[method](`${origin}/api${url}`, { headers: { Origin: origin }, data })
+      if (!res.ok()) throw new Error(`${method} ${url}: ${res.status()} ${await res.text()}`)
+      return res.json()
+    }
+    const tag = Math.random().toString(36).slice(2, 8)
+    await call('post', '/auth/signup', { name: 'Bench Runner', email: `bench.${tag}@example.test`, password: 'bench-password-long', organizationName: `Bench ${tag}` })
+    const project = await call('post', '/projects', { name: 'Editor bench', installationKind: 'vehicle', nominalVoltageV: 24 })
+    const stored = await call('get', `/projects/${project.id}/design`)
+    const design = generateDesign()
+    await call('put', `/projects/${project.id}/design`, { design: { ...design, id: stored.design.id }, baseRevision: stored.revision })
+    console.log(`design: ${design.parts.length} parts, ${design.conductors.length} conductors`)
+
+    const opened = Date.now()
+    await page.goto(`${origin}/projects/${project.id}/design`)
+    await page.locator('.findings-table tbody tr .findings-table__title').first().waitFor({ timeout: 60_000 })
+    console.log(`open to first findings: ${Date.now() - opened} ms`)
+
+    // Select a branch fuse through the device schedule, then edit its rating in the side form.
+    await page.locator('[data-tab="devices"]').click()
+    await page.locator('.schedule tbody tr', { hasText: 'Branch fuse 25.3' }).locator('td').first().click()
+    await page.locator('[data-tab="findings"]').click()
+    await page.locator('.inspector [data-field="ratingA"] input').waitFor()
+    const editMs: number[] = []
+    for (let k = 0; k < 6; k++) {
+      const under = k % 2 === 0
+      editMs.push(await timeEdit(page, 'Branch fuse 25.3', under ? '1' : '15', under))
+    }
+    console.log(`parameter edit → findings on screen: median ${median(editMs).toFixed(0)} ms (runs: ${editMs.map((v) => v.toFixed(0)).join(', ')}; goal < 100 ms)`)
+
+    await page.locator('.vue-flow__pane').click({ position: { x: 5, y: 5 } })
+    console.log(`panning, whole drawing in view: ${(await panFps(page, 3000)).toFixed(1)} fps (goal ≥ 30)`)
+    const canvas = (await page.locator('.editor-canvas').boundingBox())!
+    await page.mouse.move(canvas.x + canvas.width / 2, canvas.y + canvas.height / 2)
+    for (let k = 0; k < 12; k++) await page.mouse.wheel(0, -240)
+    await page.waitForTimeout(300)
+    console.log(`panning, zoomed in: ${(await panFps(page, 3000)).toFixed(1)} fps (goal ≥ 30)`)
+  } finally {
+    await context.close()
+    await server.close()
+    fs.rmSync(profile, { recursive: true, force: true })
+  }
+}
