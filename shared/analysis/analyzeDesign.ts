@@ -60,12 +60,14 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
   for (const s of solves) findings.push(...s.findings)
 
   const conductorsAt = new Map<string, Conductor[]>()
+  const attach = (partId: string, c: Conductor) => {
+    const list = conductorsAt.get(partId)
+    if (list) list.push(c)
+    else conductorsAt.set(partId, [c])
+  }
   for (const c of design.conductors) {
-    for (const partId of new Set([c.from.partId, c.to.partId])) {
-      const list = conductorsAt.get(partId) ?? []
-      list.push(c)
-      conductorsAt.set(partId, list)
-    }
+    attach(c.from.partId, c)
+    if (c.to.partId !== c.from.partId) attach(c.to.partId, c)
   }
   const pvGroups = buildPvGroups(design, prepared.passive!.arraysOfController)
   const faults = faultStudy(design, prepared, topology)

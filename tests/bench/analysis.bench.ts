@@ -108,7 +108,16 @@ export function generatedDesign(targetParts: number): Design {
   }
 }
 
+/** CPU ms for 10⁷ multiply-adds: a yardstick of how fast (or how shared) this machine is right now. */
+function yardstickMs(): number {
+  const c0 = cpuMs()
+  let sum = 0
+  for (let i = 0; i < 1e7; i++) sum += i * 0.5
+  return sum > 0 ? cpuMs() - c0 : 0
+}
+
 export async function run(): Promise<void> {
+  console.log(`machine yardstick: 10^7 multiply-adds in ${yardstickMs().toFixed(1)} ms CPU (an idle modern core: ~10 ms)`)
   const rows: string[][] = [['parts', 'conductors', 'scenarios', 'analysis wall/CPU (ms)', 'op solves wall (ms)', 'op share', 'findings']]
   for (const target of [100, 1_000, 10_000]) {
     const design = generatedDesign(target)
