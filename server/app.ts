@@ -16,10 +16,13 @@ import { authRoutes } from './modules/auth/auth.routes'
 import { designsRoutes } from './modules/designs/designs.routes'
 import { designImportRoutes } from './modules/exports/designImport.routes'
 import { exportsRoutes } from './modules/exports/exports.routes'
+import { shareLinksRoutes } from './modules/shares/shareLinks.routes'
+import { sharedRoutes } from './modules/shares/shared.routes'
 import { invitationsRoutes } from './modules/invitations/invitations.routes'
 import { membersRoutes } from './modules/members/members.routes'
 import { outboxRoutes } from './modules/outbox/outbox.routes'
 import { projectsRoutes } from './modules/projects/projects.routes'
+import { revisionsRoutes } from './modules/revisions/revisions.routes'
 
 export interface AppDeps {
   db: Db
@@ -53,7 +56,10 @@ export function createApp({ db, config, mailer, hub = createDocumentHub({ db }) 
   api.use('/auth', authRoutes(deps))
   api.use('/projects/:id/design/import', designImportRoutes(deps))
   api.use('/projects/:id/design', designsRoutes(deps))
+  api.use('/projects/:id/revisions', revisionsRoutes(deps))
   api.use('/projects/:id/exports', exportsRoutes(deps))
+  api.use('/projects/:id', shareLinksRoutes(deps))
+  api.use('/shared', sharedRoutes(deps))
   api.use('/projects', projectsRoutes(deps))
   api.use('/members', membersRoutes(deps))
   api.use('/invitations', invitationsRoutes(deps))
