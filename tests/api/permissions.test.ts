@@ -7,7 +7,7 @@ import { randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Role } from '../../shared/api/roles'
 import { createDemoDesign } from '../../shared/design/demo'
-import { invitations } from '../../server/db/schema'
+import { designRevisions, invitations } from '../../server/db/schema'
 import { newOneTimeToken } from '../../server/security/one-time-tokens'
 import { createMember, createOrganization, createProject, TEST_PASSWORD, uniqueEmail, type TestOrganization } from '../helpers/factories'
 import { apiClient, freshSessionClient, signedInClient, type Api, type HttpMethod } from '../helpers/http'
@@ -52,6 +52,15 @@ async function freshInvitation(): Promise<string> {
       expiresAt: new Date(Date.now() + 86_400_000),
     })
     .returning({ id: invitations.id })
+  return row.id
+}
+
+/** A revision (the demo design) of the project, inserted directly. */
+async function freshRevision(projectId: string): Promise<string> {
+  const [row] = await server.db
+    .insert(designRevisions)
+    .values({ projectId, name: 'matrix', snapshot: new Uint8Array([0, 0]), design: createDemoDesign(), createdBy: orgA.owner.id })
+    .returning({ id: designRevisions.id })
   return row.id
 }
 
@@ -112,6 +121,20 @@ const ROUTES: RouteCase[] = [
   projectRoute('put', '/api/projects/:id/design', ['owner', 'designer'], 200, async (id) => ({
     url: `/api/projects/${id}/design`,
     body: { design: createDemoDesign(), baseRevision: 1 },
+  })),
+  projectRoute('get', '/api/projects/:id/revisions', ALL_ROLES, 200, async (id) => ({ url: `/api/projects/${id}/revisions` })),
+  projectRoute('post', '/api/projects/:id/revisions', ['owner', 'designer'], 201, async (id) => ({
+    url: `/api/projects/${id}/revisions`,
+    body: { name: 'issued for review' },
+  })),
+  projectRoute('get', '/api/projects/:id/revisions/:revisionId', ALL_ROLES, 200, async (id) => ({
+    url: `/api/projects/${id}/revisions/${await freshRevision(id)}`,
+  })),
+  projectRoute('get', '/api/projects/:id/revisions/compare', ALL_ROLES, 200, async (id) => ({
+    url: `/api/projects/${id}/revisions/compare?from=${await freshRevision(id)}&to=${await freshRevision(id)}`,
+  })),
+  projectRoute('post', '/api/projects/:id/revisions/:revisionId/restore', ['owner', 'designer'], 201, async (id) => ({
+    url: `/api/projects/${id}/revisions/${await freshRevision(id)}/restore`,
   })),
   {
     method: 'get', path: '/api/members', allowed: ['owner', 'designer', 'reviewer'], success: 200, resource: false,
