@@ -14,7 +14,7 @@ import { createOrganization, createProject, type TestOrganization } from '../hel
 import { freshSessionClient, type Api } from '../helpers/http'
 import { runNgspice } from '../helpers/ngspice'
 import { startTestServer, type TestServer } from '../helpers/server'
-import { xmlWellFormedError } from '../unit/export/xmlWellFormed'
+import { xmlWellFormedError } from '../../shared/export/xmlWellFormed'
 
 let server: TestServer
 let org: TestOrganization

@@ -5,7 +5,7 @@ import { createDemoDesign, createEmptyDesign } from '../../../shared/design/demo
 import type { Design } from '../../../shared/design/schema'
 import { GENERAL_CAUTION, LITHIUM_CAUTION } from '../../../shared/export/cautions'
 import { escapeXml, renderDiagramSvg } from '../../../shared/export/renderDiagramSvg'
-import { xmlWellFormedError } from './xmlWellFormed'
+import { xmlWellFormedError } from '../../../shared/export/xmlWellFormed'
 
 const titleBlock = { project: 'Expedition truck', client: 'R. Example', revision: 'Rev 4 — as built', date: '2026-12-02', designer: 'Dana Designer' }
 const textOf = (svg: string) => [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1])

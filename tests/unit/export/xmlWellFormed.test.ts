@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { xmlWellFormedError } from './xmlWellFormed'
+import { xmlWellFormedError } from '../../../shared/export/xmlWellFormed'
 
 // The checker itself, against the XML 1.0 well-formedness constraints it claims to test (§2.1, §3.1, §4.1).
 describe('xmlWellFormedError', () => {

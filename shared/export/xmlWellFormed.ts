@@ -1,3 +1,4 @@
+// Used by the tests of the SVG export (unit and API) to prove the output well-formed.
 // A small strict XML well-formedness check (XML 1.0 §2.1): one root element, every tag closed in
 // order, attributes quoted and unique, only the five predefined or numeric entity references.
 // Enough for the SVG we emit; it returns the first problem found, or null.
