@@ -11,13 +11,19 @@ import { solveScenario, type ScenarioSolve } from './_lib/solveScenario'
 import { buildTerminalNodes } from './_lib/terminalNodes'
 import { makeFinding, mergeFindings } from './findings'
 import { protectionTopology } from './protectionTopology'
-import { RULES } from './rules'
+import { COORDINATION_RULES, RULES } from './rules'
 import type { PvGroup, RuleContext } from './rules/types'
 import type { AnalysisResult, Finding } from './types'
 
 export interface AnalyzeOptions {
   /** Only these scenarios (default: all). Unknown ids give a warning finding. */
   scenarioIds?: string[]
+  /**
+   * Also run the time-current checks of shared/protection (motor starts, fault clearing before
+   * conductor damage, selectivity, automatic-reset breakers). Off by default until the examples and
+   * the CLI's expectations take their selectivity warnings into account.
+   */
+  coordination?: boolean
 }
 
 /**
@@ -80,8 +86,9 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
     partById: new Map(design.parts.map((p) => [p.id, p])), conductorsAtPart: conductorsAt,
     loadDrops: loadDrops(design, solves, topology, conductorsAt), pvGroups, nodes, topology,
     partMaxCurrent: partMaxCurrents(design, solves),
+    loadRunningA: loadRunningCurrents(design, solves),
   }
-  for (const rule of RULES) {
+  for (const rule of options.coordination ? [...RULES, ...COORDINATION_RULES] : RULES) {
     try {
       findings.push(...rule.run(ctx))
     } catch (error) {
@@ -130,6 +137,23 @@ function partMaxCurrents(design: Design, solves: ScenarioSolve[]): Map<string, {
       if (busIds.has(c.from.partId) && amps < 0) inflow.set(c.from.partId, (inflow.get(c.from.partId) ?? 0) - amps)
     })
     for (const [id, amps] of inflow) note(id, amps, s.scenario.id)
+  }
+  return result
+}
+
+/** Running current per load: the highest outside motor-start scenarios, else its rating at nominal voltage. */
+function loadRunningCurrents(design: Design, solves: ScenarioSolve[]): Map<string, number> {
+  const result = new Map<string, number>()
+  const nominalV = design.settings.nominalVoltageV
+  for (const part of design.parts) {
+    if (part.type !== 'load') continue
+    let amps = 0
+    for (const s of solves) if (!s.scenario.motorStart) amps = Math.max(amps, Math.abs(s.partCurrentA.get(part.id) ?? 0))
+    if (amps === 0) {
+      const p = part.params
+      amps = p.model === 'current' ? (p.currentA ?? 0) : p.model === 'power' ? (p.powerW ?? 0) / nominalV : nominalV / (p.resistanceOhm ?? Infinity)
+    }
+    result.set(part.id, finite(amps))
   }
   return result
 }

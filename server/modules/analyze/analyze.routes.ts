@@ -10,6 +10,8 @@ import { validate } from '../../http/validate'
 const body = z.object({
   design: z.unknown().refine((value) => value !== undefined, 'Send the design'),
   scenarioIds: z.array(z.string({ error: 'Scenario ids are strings' }), { error: 'scenarioIds is a list of scenario ids' }).max(50).optional(),
+  /** Also run the time-current checks (motor starts, fault clearing, selectivity). */
+  coordination: z.boolean({ error: 'coordination is true or false' }).optional(),
 })
 const query = z.object({ spice: z.string().min(1, 'Name the scenario to export').max(64).optional() })
 
@@ -37,7 +39,7 @@ export function createAnalyzeRouter(): Router {
       if (!scenario) throw invalidRequest(`No scenario has the id "${q.spice}"`, [{ path: 'spice', message: `No scenario has the id "${q.spice}"` }])
       spiceNetlist = toSpiceNetlist(compileCircuit(design, scenario).circuit, { title: `${design.name}: ${scenario.name}` })
     }
-    const result: AnalyzeResponse = analyzeDesign(design, { scenarioIds: b.scenarioIds })
+    const result: AnalyzeResponse = analyzeDesign(design, { scenarioIds: b.scenarioIds, coordination: b.coordination })
     if (spiceNetlist !== undefined) result.spiceNetlist = spiceNetlist
     res.json(result)
   })

@@ -7,6 +7,7 @@ import { deviceInterruptingRule } from './deviceInterrupting'
 import { deviceVoltageRatingRule } from './deviceVoltageRating'
 import { ignitionProtectionRule } from './ignitionProtection'
 import { partRatingRule } from './partRating'
+import { protectionCoordinationRule } from './protectionCoordination'
 import { pvCircuitSizingRule } from './pvCircuitSizing'
 import { pvControllerVoltageRule } from './pvControllerVoltage'
 import { pvStringFusesRule } from './pvStringFuses'
@@ -32,5 +33,8 @@ export const RULES: readonly Rule[] = [
   connectivityRule,
   conductorPolarityRule,
 ]
+
+/** Time-current checks (motor starts, fault clearing, selectivity, automatic reset); opt-in for now. */
+export const COORDINATION_RULES: readonly Rule[] = [protectionCoordinationRule]
 
 export type { Rule, RuleContext } from './types'

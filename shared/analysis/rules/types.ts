@@ -69,6 +69,8 @@ export interface RuleContext {
   partById: Map<string, Part>
   conductorsAtPart: Map<string, Conductor[]>
   loadDrops: LoadDrop[]
+  /** Running current of each load: the highest outside motor starts, else its rating at nominal voltage. */
+  loadRunningA: Map<string, number>
   /** Highest current through each part (bus bars: the current fed into the bar), over the scenarios. */
   partMaxCurrent: Map<string, { currentA: number; scenarioId: string }>
   pvGroups: PvGroup[]

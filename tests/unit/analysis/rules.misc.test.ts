@@ -121,3 +121,32 @@ describe('scenario results', () => {
     expect(result.devices).toEqual([expect.objectContaining({ id: 'fuse', ratingA: 15, protectsConductorIds: ['feed', 'pos'] })])
   })
 })
+
+describe('protection-coordination (shared/protection time-current checks fed by the analysis)', () => {
+  it('flags a far-end fault a 150 A breaker may never clear on 30 m of 6 AWG (ICEA withstand)', () => {
+    // Far-end fault across the load, return included (hand figure from NEC Ch. 9 Table 8, 6 AWG 0.491 Ω/kft at 75 °C):
+    //  6 AWG at 30 °C: 0.491 / 304.8 × (1 + 0.00323 × (30 − 75)) = 0.0013768 Ω/m → 30 m: 0.041303 Ω, out and back 0.082607 Ω
+    //  R = 0.004 (bank) + 0.0000864 (feed) + 0.001 (breaker) + 0.082607 = 0.087693 Ω → I = 12.8 / 0.087693 = 146.0 A,
+    //  about 1 × the 150 A rating: a breaker is not sure to open at all.
+    const design = simpleBranch({
+      sizeId: 'awg-6', lengthM: 30,
+      fuse: { family: 'breaker-magnetic-hydraulic', ratingA: 150, interruptingRatingA: 10000, dcVoltageRatingV: 65 },
+      load: { model: 'current', currentA: 60, duty: 'intermittent' },
+    })
+    const result = analyzeDesign(design, { coordination: true })
+    expectAllFinite(result)
+    const farEnd = result.conductors.find((c) => c.id === 'pos')!.faultCurrentFarEndA
+    expect(Math.abs(farEnd - 146.0) / 146.0).toBeLessThan(0.01)
+    const f = result.findings.find((x) => x.ruleId === 'fault-not-cleared-before-damage')
+    expect(f?.partIds).toEqual(['fuse'])
+    expect(f?.conductorIds).toEqual(['pos'])
+  })
+
+  it('finds no motor-start problem on a branch without a start, and is off by default', () => {
+    const result = analyzeDesign(simpleBranch(), { coordination: true })
+    expect(result.findings.filter((f) => f.ruleId === 'motor-start-nuisance-open')).toEqual([])
+    // Off by default: the plain analysis does not run the time-current checks.
+    const plain = analyzeDesign(simpleBranch({ sizeId: 'awg-6', lengthM: 30, fuse: { family: 'breaker-magnetic-hydraulic', ratingA: 150 } }))
+    expect(plain.findings.some((f) => f.ruleId === 'fault-not-cleared-before-damage')).toBe(false)
+  })
+})
