@@ -1,5 +1,7 @@
-import { smallestPassingSize } from '../../conductors/suggest'
-import { getConductorSize, conductorSizeLabel } from '../../conductors/sizes'
+import type { AmpacityResult } from '../../conductors/ampacity'
+import { circuitDrop } from '../../conductors/voltageDrop'
+import { ampacityOf } from '../_lib/conductorStats'
+import { conductorSizeLabel, getConductorSize, sizesInOrder } from '../../conductors/sizes'
 import { nextStandardRatingA, nearestStandardRatingAtMost } from '../../protection/ratings'
 import { familyId } from '../_lib/ocpdLimit'
 import type { Conductor } from '../../design/schema'
@@ -9,23 +11,30 @@ import type { RuleContext } from './types'
 // Suggested fixes: the smallest standard conductor size, or the nearest standard device rating,
 // that passes — with a patch the editor can apply.
 
+// Ampacity of each candidate size, looked up once per analysis (a design has few distinct runs).
+const ampacityMemos = new WeakMap<RuleContext, Map<string, { result: AmpacityResult | null; source: string }>>()
+
 /** Smallest size of the conductor's own system (AWG or mm²) carrying `currentA` within `allowedDropPercent` over its loop. */
 export function suggestConductor(ctx: RuleContext, c: Conductor, currentA: number, allowedDropPercent = 100, why = ''): Finding['suggestion'] | undefined {
   try {
+    let memo = ampacityMemos.get(ctx)
+    if (!memo) ampacityMemos.set(ctx, (memo = new Map()))
     const size = getConductorSize(c.sizeId)
-    const found = smallestPassingSize({
-      // Solver round-off (25.000000001 A) must not skip a size that fits exactly.
-      currentA: Math.max(0, currentA - 1e-6), lengthM: c.lengthM, allowedDropPercent: Math.max(allowedDropPercent, 1e-6),
-      nominalV: ctx.nominalV, material: c.material, insulationRatingC: c.insulationRatingC,
-      ambientC: c.ambientC ?? ctx.design.settings.defaultAmbientC, installation: c.installation,
-      bundledCount: c.bundledCount, profile: ctx.profile, system: size.system,
-      conductorTemperatureC: c.ambientC ?? ctx.design.settings.defaultAmbientC,
-    })
+    // Solver round-off (25.000000001 A) must not skip a size that fits exactly.
+    const needA = Math.max(0, currentA - 1e-6)
+    const temperatureC = c.ambientC ?? ctx.design.settings.defaultAmbientC
+    let found: string | null = null
+    for (const candidate of sizesInOrder(size.system)) {
+      const ampacityA = ampacityOf({ ...c, sizeId: candidate.id }, ctx.design, ctx.nominalV, memo).result?.ampacityA
+      if (ampacityA == null || ampacityA < needA) continue
+      const drop = circuitDrop({ currentA: needA, sizeId: candidate.id, material: c.material, lengthM: c.lengthM, temperatureC, nominalV: ctx.nominalV })
+      if (drop.dropPercent <= Math.max(allowedDropPercent, 1e-6) + 1e-12) { found = candidate.id; break }
+    }
     if (!found) return { text: `No standard ${size.system === 'awg' ? 'AWG' : 'metric'} size passes: split the load or shorten the run${why}.` }
-    if (getConductorSize(found.sizeId).rank <= size.rank) return undefined
+    if (getConductorSize(found).rank <= size.rank) return undefined
     return {
-      text: `Use ${conductorSizeLabel(found.sizeId)} for ${c.label || c.id}${why}.`,
-      patch: { kind: 'conductor', id: c.id, field: 'sizeId', value: found.sizeId },
+      text: `Use ${conductorSizeLabel(found)} for ${c.label || c.id}${why}.`,
+      patch: { kind: 'conductor', id: c.id, field: 'sizeId', value: found },
     }
   } catch {
     return undefined
