@@ -22,6 +22,9 @@ import { invitationsRoutes } from './modules/invitations/invitations.routes'
 import { membersRoutes } from './modules/members/members.routes'
 import { outboxRoutes } from './modules/outbox/outbox.routes'
 import { projectsRoutes } from './modules/projects/projects.routes'
+import { uploadsRoutes } from './modules/uploads/uploads.routes'
+import { loadImportRoutes } from './modules/loadImport/loadImport.routes'
+import type { ObjectStorage } from './storage/objectStorage'
 import { revisionsRoutes } from './modules/revisions/revisions.routes'
 
 export interface AppDeps {
@@ -30,9 +33,11 @@ export interface AppDeps {
   mailer: Mailer
   /** Shared with the /collab WebSocket endpoint (attachCollabServer); created here when absent. */
   hub?: DocumentHub
+  /** Object storage for attachments (server/storage). */
+  storage?: ObjectStorage
 }
 
-export function createApp({ db, config, mailer, hub = createDocumentHub({ db }) }: AppDeps): Express {
+export function createApp({ db, config, mailer, hub = createDocumentHub({ db }), storage }: AppDeps): Express {
   const app = express()
   app.disable('x-powered-by')
   app.set('query parser', 'simple')
@@ -41,7 +46,7 @@ export function createApp({ db, config, mailer, hub = createDocumentHub({ db }) 
     next()
   })
 
-  const deps: RouteDeps = { db, config, mailer, hub, requireSession: createRequireSession({ db, config }) }
+  const deps: RouteDeps = { db, config, mailer, hub, storage, requireSession: createRequireSession({ db, config }) }
   const api = express.Router()
   api.use(express.json({ limit: config.jsonBodyLimit }))
   api.use(cookieParser())
@@ -54,7 +59,9 @@ export function createApp({ db, config, mailer, hub = createDocumentHub({ db }) 
     res.json({ ok: true })
   })
   api.use('/auth', authRoutes(deps))
+  api.use('/projects/:id/design/import-loads', loadImportRoutes(deps))
   api.use('/projects/:id/design/import', designImportRoutes(deps))
+  api.use('/projects/:id/attachments', uploadsRoutes(deps))
   api.use('/projects/:id/design', designsRoutes(deps))
   api.use('/projects/:id/revisions', revisionsRoutes(deps))
   api.use('/projects/:id/exports', exportsRoutes(deps))

@@ -3,6 +3,7 @@ import { randomBytes } from 'node:crypto'
 import fs from 'node:fs'
 import path from 'node:path'
 import { fileURLToPath } from 'node:url'
+import type { S3Settings } from './storage/objectStorage'
 
 export const REPO_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..')
 
@@ -38,6 +39,8 @@ export interface AppConfig {
   loginRateLimit: { max: number; windowMs: number }
   resetRateLimit: { max: number; windowMs: number }
   secureCookies: boolean
+  /** A real bucket (S3_BUCKET set); null: main.ts and the tests start the local fake in <dataDir>/s3. */
+  s3: S3Settings | null
 }
 
 type Env = Record<string, string | undefined>
@@ -107,6 +110,17 @@ export function loadConfig(env: Env = process.env, overrides: Partial<AppConfig>
     loginRateLimit: { max: 10, windowMs: 15 * 60 * 1000 },
     resetRateLimit: { max: 5, windowMs: 60 * 60 * 1000 },
     secureCookies: publicUrl.startsWith('https:'),
+    s3: env.S3_BUCKET
+      ? {
+          endpoint: env.S3_ENDPOINT || undefined,
+          bucket: env.S3_BUCKET,
+          region: env.S3_REGION || 'us-east-1',
+          accessKeyId: env.S3_ACCESS_KEY_ID ?? '',
+          secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? '',
+          // S3-compatible services on a custom endpoint usually need path-style addressing.
+          forcePathStyle: Boolean(env.S3_ENDPOINT),
+        }
+      : null,
   }
   return { ...config, ...overrides }
 }

@@ -12,6 +12,8 @@ import { prepareDatabase } from './db/prepare'
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './db/seed'
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp'
 import { createMailer } from './mail/mailer'
+import { startLocalS3, type LocalS3 } from './storage/localS3'
+import { createS3Storage } from './storage/objectStorage'
 
 function listen(server: http.Server, port: number, host: string): Promise<void> {
   return new Promise((resolve, reject) => {
@@ -41,11 +43,15 @@ async function main(): Promise<void> {
     mailer = createMailer({ ...config.smtp, host: '127.0.0.1', port: fakeSmtp.port })
   }
 
+  // Attachments: a real bucket from S3_* variables, else the local fake with its files in .data/s3.
+  let localS3: LocalS3 | undefined
+  const storage = config.s3 ? createS3Storage(config.s3) : (localS3 = await startLocalS3({ directory: path.join(config.dataDir, 's3'), bucket: 'ampwright-local' })).storage
+
   if (!fs.existsSync(path.join(config.clientDir, 'index.html'))) {
     console.warn('[server] no client build in dist/: run `npx vite build` (npm start does) to get the app')
   }
   const hub = createDocumentHub({ db: database.db })
-  const app = createApp({ db: database.db, config, mailer, hub })
+  const app = createApp({ db: database.db, config, mailer, hub, storage })
   const server = http.createServer(app)
   const collab = attachCollabServer(server, { db: database.db, config, hub })
   try {
@@ -57,6 +63,7 @@ async function main(): Promise<void> {
       console.error('[server] could not listen:', error)
     }
     await fakeSmtp?.close()
+    await localS3?.close()
     await database.close()
     process.exit(1)
   }
@@ -86,6 +93,7 @@ async function main(): Promise<void> {
       await collabClosed
       mailer.close()
       await fakeSmtp?.close()
+      await localS3?.close()
       await database.close()
       process.exit(0)
     })

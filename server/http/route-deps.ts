@@ -3,6 +3,7 @@ import type { AppConfig } from '../config'
 import type { DocumentHub } from '../collab/documentHub'
 import type { Db } from '../db/client'
 import type { Mailer } from '../mail/mailer'
+import type { ObjectStorage } from '../storage/objectStorage'
 
 /** What every feature router receives from createApp. */
 export interface RouteDeps {
@@ -10,6 +11,8 @@ export interface RouteDeps {
   config: AppConfig
   mailer: Mailer
   requireSession: RequestHandler
+  /** Uploaded files; absent when no storage was configured (uploads then answer 503). */
+  storage?: ObjectStorage
   /** Open designs: every change to a design's Yjs state goes through its room. */
   hub: DocumentHub
 }

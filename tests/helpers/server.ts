@@ -1,6 +1,9 @@
 // A real Ampwright server for API and browser tests: the real app on 127.0.0.1 port 0, the real
 // PostgreSQL named by DATABASE_URL (already migrated by `server/db/prepare.ts --fresh`) and the fake SMTP.
 import { randomBytes } from 'node:crypto'
+import fs from 'node:fs'
+import os from 'node:os'
+import path from 'node:path'
 import http from 'node:http'
 import type { AddressInfo } from 'node:net'
 import { desc, sql } from 'drizzle-orm'
@@ -13,6 +16,7 @@ import { connectDatabase, type Db } from '../../server/db/client'
 import { outboxMessages } from '../../server/db/schema'
 import { startFakeSmtp } from '../../server/mail/fake-smtp'
 import { createMailer } from '../../server/mail/mailer'
+import { startLocalS3 } from '../../server/storage/localS3'
 
 export interface TestServer {
   app: Express
@@ -73,7 +77,10 @@ export async function startTestServer(
   )
   const mailer = createMailer({ ...config.smtp, host: '127.0.0.1', port: fakeSmtp.port })
   const hub = createDocumentHub({ db: database.db, options: options.compactEvery ? { compactEvery: options.compactEvery } : {} })
-  const app = createApp({ db: database.db, config, mailer, hub })
+  // Attachments go to an in-process S3 fake with its own temporary folder.
+  const s3Dir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-s3-'))
+  const localS3 = await startLocalS3({ directory: s3Dir, bucket: 'ampwright-test' })
+  const app = createApp({ db: database.db, config, mailer, hub, storage: localS3.storage })
   server.on('request', app)
   const collab = attachCollabServer(server, { db: database.db, config, hub })
 
@@ -106,6 +113,8 @@ export async function startTestServer(
       await new Promise<void>((resolve) => server.close(() => resolve()))
       mailer.close()
       await fakeSmtp.close()
+      await localS3.close()
+      fs.rmSync(s3Dir, { recursive: true, force: true })
       await database.close()
     },
   }
