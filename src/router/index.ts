@@ -14,6 +14,7 @@ const routes: RouteRecordRaw[] = [
   { path: '/projects/:id/design', name: 'design', component: () => import('@/views/editor/DesignEditorView.vue'), meta: { action: 'project.read', layout: 'bare', title: 'Design' } },
   { path: '/members', name: 'members', component: () => import('@/views/members/MembersView.vue'), meta: { action: 'member.read', title: 'Members' } },
   { path: '/outbox', name: 'outbox', component: () => import('@/views/outbox/OutboxView.vue'), meta: { action: 'outbox.read', title: 'Mail outbox' } },
+  { path: '/s/:token', name: 'shared-design', component: () => import('@/views/share/SharedDesignView.vue'), meta: { public: true, layout: 'bare', title: 'Shared design' } },
   { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { public: true, title: 'Not found' } },
 ]
 
