@@ -6,6 +6,7 @@ import {
   bigserial,
   boolean,
   customType,
+  doublePrecision,
   check,
   index,
   integer,
@@ -294,4 +295,33 @@ export const attachments = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index('attachments_project_idx').on(t.projectId, t.createdAt)],
+)
+
+/**
+ * An organisation's own protective devices, built from their datasheet time-current points
+ * (shared/api/devices.schemas.ts validates them; shared/protection/timeCurrent/datasheetBand builds the band).
+ */
+export const customDevices = pgTable(
+  'custom_devices',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organizationId: uuid('organization_id')
+      .notNull()
+      .references(() => organizations.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    /** 'fuse' | 'breaker' (checked by the shared schema). */
+    kind: text('kind').notNull(),
+    ratingA: doublePrecision('rating_a').notNull(),
+    dcVoltageRatingV: doublePrecision('dc_voltage_rating_v'),
+    interruptingRatingA: doublePrecision('interrupting_rating_a'),
+    ignitionProtected: boolean('ignition_protected').notNull().default(false),
+    timeDelay: boolean('time_delay').notNull().default(false),
+    /** [{ currentA | multiple, minMeltS?, maxClearS? }] as entered. */
+    points: jsonb('points').notNull(),
+    source: text('source').notNull(),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index('custom_devices_org_idx').on(t.organizationId, t.name)],
 )
