@@ -29,7 +29,9 @@ const systemArb = fc.record({
   solar: fc.option(fc.record({ strings: fc.integer({ min: 1, max: 4 }), modules: fc.integer({ min: 1, max: 4 }), sun: fc.boolean() }), { nil: undefined }),
 })
 
-function build(sys: fc.infer<typeof systemArb>) {
+type GeneratedSystem = typeof systemArb extends fc.Arbitrary<infer T> ? T : never
+
+function build(sys: GeneratedSystem) {
   const s = settingsFor(sys.profile, sys.voltage)
   const parts: Part[] = [
     part('battery', 'bank', { nominalVoltageV: 12.8, seriesCount: sys.voltage / 12, parallelCount: sys.parallel, internalResistanceOhm: sys.internalOhm }, s),
