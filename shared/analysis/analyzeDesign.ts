@@ -19,9 +19,9 @@ export interface AnalyzeOptions {
   /** Only these scenarios (default: all). Unknown ids give a warning finding. */
   scenarioIds?: string[]
   /**
-   * Also run the time-current checks of shared/protection (motor starts, fault clearing before
-   * conductor damage, selectivity, automatic-reset breakers). Off by default until the examples and
-   * the CLI's expectations take their selectivity warnings into account.
+   * Run the time-current checks of shared/protection (motor starts, fault clearing before conductor
+   * damage, thermal breakers as sole protection, selectivity, automatic-reset breakers). On by
+   * default; `false` leaves them out (e.g. a quick check while a design is still being sketched).
    */
   coordination?: boolean
 }
@@ -88,7 +88,7 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
     partMaxCurrent: partMaxCurrents(design, solves),
     loadRunningA: loadRunningCurrents(design, solves),
   }
-  for (const rule of options.coordination ? [...RULES, ...COORDINATION_RULES] : RULES) {
+  for (const rule of options.coordination === false ? RULES : [...RULES, ...COORDINATION_RULES]) {
     try {
       findings.push(...rule.run(ctx))
     } catch (error) {

@@ -2,6 +2,7 @@ import { createDemoDesign } from '../../../shared/design/demo'
 import { badDesign, floatingPart } from './faulty'
 import { sailboat24V } from './sailboat'
 import { smallVan12V } from './smallVan'
+import { autoResetBreaker, motorStartNuisance, notSelective, slowFaultClearing, thermalBreakerOnly } from './timeCurrent'
 
 /** Every file in examples/ and the code that produces it (server/cli/write-examples.ts writes them). */
 export const EXAMPLE_FILES: Record<string, () => unknown> = {
@@ -10,4 +11,19 @@ export const EXAMPLE_FILES: Record<string, () => unknown> = {
   'sailboat-24v.json': sailboat24V,
   'bad-design.json': badDesign,
   'floating-part.json': floatingPart,
+  // One per time-current finding (shared/protection/checks), each with the rule it must trigger.
+  'motor-start-nuisance.json': motorStartNuisance,
+  'slow-fault-clearing.json': slowFaultClearing,
+  'thermal-breaker-only.json': thermalBreakerOnly,
+  'not-selective.json': notSelective,
+  'auto-reset-breaker.json': autoResetBreaker,
+}
+
+/** The rule each time-current example exists to show (tests/unit/cli/examples.test.ts checks it fires). */
+export const TIME_CURRENT_EXAMPLE_RULES: Record<string, string> = {
+  'motor-start-nuisance.json': 'motor-start-nuisance-open',
+  'slow-fault-clearing.json': 'fault-not-cleared-before-damage',
+  'thermal-breaker-only.json': 'thermal-breaker-sole-protection',
+  'not-selective.json': 'not-selective',
+  'auto-reset-breaker.json': 'auto-reset-breaker-not-allowed',
 }

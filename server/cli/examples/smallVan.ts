@@ -4,7 +4,10 @@ import type { Conductor, Design, DesignSettings, PartType } from '../../../share
 
 // An invented 12 V camper van built to pass every check: short fat main runs, branch fuses at
 // 125–150 % of their loads and within the conductors' ampacity, two PV strings (no string fuses
-// needed, NEC 690.9), and critical loads within 3 % drop.
+// needed, NEC 690.9), and critical loads within 3 % drop. The Class T main is 250 A (the 1/0 runs allow
+// it): a 150 A one may melt after ≈ 4 ms at the ≈ 1.4 kA a short past a 40–50 A strip fuse draws, before
+// that strip fuse has cleared (up to ≈ 17–26 ms), so the whole van would go dark for one branch fault.
+// At 250 A the Class T may not melt before ≈ 33 ms there (selectivity by the shared/protection bands).
 
 const SETTINGS: DesignSettings = { nominalVoltageV: 12, unitSystem: 'metric', profile: 'vehicle', defaultAmbientC: 30 }
 const part = <T extends PartType>(type: T, id: string, label: string, x: number, y: number, params: Partial<ParamsOf<T>> = {}) =>
@@ -24,7 +27,7 @@ export function smallVan12V(): Design {
         outputCurrentA: 30, efficiency: 0.97, mppt: true }),
       part('battery', 'house-bank', 'House battery LFP 12.8 V 100 Ah', 500, 420, { chemistry: 'lfp', nominalVoltageV: 12.8,
         capacityAh: 100, internalResistanceOhm: 0.006, seriesCount: 1, parallelCount: 1 }),
-      part('fuse', 'main-fuse', 'Main fuse Class T 150 A', 680, 280, { family: 'class-t', ratingA: 150, dcVoltageRatingV: 160,
+      part('fuse', 'main-fuse', 'Main fuse Class T 250 A', 680, 280, { family: 'class-t', ratingA: 250, dcVoltageRatingV: 160,
         interruptingRatingA: 20000 }),
       part('battery-switch', 'main-switch', 'Battery switch', 820, 280, { ratingA: 300 }),
       part('shunt', 'shunt', 'Shunt 500 A / 50 mV', 680, 560, { ratingA: 500, resistanceOhm: 0.0001 }),

@@ -34,7 +34,7 @@ export const RULES: readonly Rule[] = [
   conductorPolarityRule,
 ]
 
-/** Time-current checks (motor starts, fault clearing, selectivity, automatic reset); opt-in for now. */
+/** Time-current checks (motor starts, fault clearing, selectivity, automatic reset); on unless `coordination: false`. */
 export const COORDINATION_RULES: readonly Rule[] = [protectionCoordinationRule]
 
 export type { Rule, RuleContext } from './types'

@@ -142,11 +142,13 @@ describe('protection-coordination (shared/protection time-current checks fed by 
     expect(f?.conductorIds).toEqual(['pos'])
   })
 
-  it('finds no motor-start problem on a branch without a start, and is off by default', () => {
+  it('finds no motor-start problem on a branch without a start; on by default, off with coordination: false', () => {
     const result = analyzeDesign(simpleBranch(), { coordination: true })
     expect(result.findings.filter((f) => f.ruleId === 'motor-start-nuisance-open')).toEqual([])
-    // Off by default: the plain analysis does not run the time-current checks.
-    const plain = analyzeDesign(simpleBranch({ sizeId: 'awg-6', lengthM: 30, fuse: { family: 'breaker-magnetic-hydraulic', ratingA: 150 } }))
-    expect(plain.findings.some((f) => f.ruleId === 'fault-not-cleared-before-damage')).toBe(false)
+    // The same far-end fault as above (≈ 146 A on a 150 A breaker): found by default, not when switched off.
+    const slow = simpleBranch({ sizeId: 'awg-6', lengthM: 30, fuse: { family: 'breaker-magnetic-hydraulic', ratingA: 150 } })
+    expect(analyzeDesign(slow).findings.some((f) => f.ruleId === 'fault-not-cleared-before-damage')).toBe(true)
+    const off = analyzeDesign(slow, { coordination: false })
+    expect(off.findings.some((f) => f.ruleId === 'fault-not-cleared-before-damage')).toBe(false)
   })
 })
