@@ -9,6 +9,7 @@ import { analyzeDesign } from '../../shared/analysis'
 import { createDemoDesign } from '../../shared/design/demo'
 import { createOrganization, createProject, type TestOrganization } from '../helpers/factories'
 import { freshSessionClient } from '../helpers/http'
+import { SESSION_COOKIE } from '../../server/security/session-token'
 import { startTestServer, type TestServer } from '../helpers/server'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
@@ -82,5 +83,31 @@ describe('share link page', () => {
     await expect.poll(() => page.locator('[data-test="share-refused"]').textContent(), { timeout: 15_000 }).toContain('revoked')
     expect(pageErrors).toEqual([])
     expect(offOrigin).toEqual([])
+  })
+
+  it("puts the deliverables on the designer's project page: BOM with spares, a new share link", async () => {
+    const projectId = await createProject(server.db, org, { name: 'Liveaboard deliverables', nominalVoltageV: 24, document: createDemoDesign() })
+    const designer = await freshSessionClient(server, { userId: org.designer.id, organizationId: org.id })
+    const token = designer.cookie!.split('=').slice(1).join('=')
+    const designerContext = await chromium.launchPersistentContext(fs.mkdtempSync(path.join(os.tmpdir(), 'aw-share-d-')), {
+      executablePath: '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS, viewport: { width: 1366, height: 900 },
+    })
+    try {
+      await designerContext.addCookies([{ name: SESSION_COOKIE, value: token, url: server.baseUrl }])
+      const p = designerContext.pages()[0] ?? (await designerContext.newPage())
+      const errors: string[] = []
+      p.on('pageerror', (e) => errors.push(e.message))
+      await p.goto(`${server.baseUrl}/projects/${projectId}`)
+      await p.locator('[data-test="deliverables"]').waitFor({ timeout: 15_000 })
+      // Demo panel ways [10, 10, 15, 10, 10, 5] A regular blade: 10 A used four times → two spares.
+      const spareRow = p.locator('[data-test="spares-table"] tbody tr').filter({ hasText: 'Blade fuse, regular size, 10 A' })
+      await expect.poll(() => spareRow.locator('input').inputValue(), { timeout: 15_000 }).toBe('2')
+      await p.getByRole('button', { name: 'Make link' }).click()
+      await expect.poll(() => p.locator('[data-test="new-share-url"]').textContent(), { timeout: 15_000 }).toMatch(new RegExp(`${server.baseUrl}/s/[A-Za-z0-9_-]{43}`))
+      await p.locator('[data-test="deliverables"]').screenshot({ path: path.join(SHOTS, 'deliverables-panel.png') })
+      expect(errors).toEqual([])
+    } finally {
+      await designerContext.close()
+    }
   })
 })
