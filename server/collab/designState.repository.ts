@@ -1,7 +1,7 @@
 // Storage of a design's Yjs state: the compacted state (design_states), the durable log of later
 // updates (design_updates) and the designs row whose revision counter every stored change advances.
 import { and, asc, eq, gt, lte, sql } from 'drizzle-orm'
-import type { DbOrTx } from '../db/client'
+import type { Db, DbOrTx } from '../db/client'
 import { designs, designStates, designUpdates } from '../db/schema'
 
 export interface StoredDesignState {
@@ -16,7 +16,17 @@ export interface StoredDesignState {
   updates: { id: number; update: Uint8Array }[]
 }
 
-export async function readStoredState(db: DbOrTx, projectId: string): Promise<StoredDesignState | undefined> {
+/**
+ * Reads state and log in one snapshot (repeatable read): a compaction committing between the two
+ * queries would otherwise hide the updates it folded.
+ */
+export function readStoredState(db: DbOrTx, projectId: string): Promise<StoredDesignState | undefined> {
+  // Inside a caller's transaction: read there (its snapshot is the caller's business).
+  if ('rollback' in db) return readStoredStateIn(db, projectId)
+  return (db as Db).transaction((tx) => readStoredStateIn(tx, projectId), { isolationLevel: 'repeatable read', accessMode: 'read only' })
+}
+
+async function readStoredStateIn(db: DbOrTx, projectId: string): Promise<StoredDesignState | undefined> {
   const [design] = await db
     .select({
       document: designs.document,
@@ -48,21 +58,23 @@ export async function insertInitialState(db: DbOrTx, projectId: string, state: U
   return inserted.length === 1
 }
 
-/** Commits one update to the log and advances the design's revision, in one transaction. */
+/**
+ * Commits one update to the log and advances the design's revision: one statement (one round trip,
+ * one commit), so the write that must finish before a broadcast stays short.
+ */
 export async function appendUpdate(db: DbOrTx, input: { projectId: string; update: Uint8Array; userId: string | null }) {
-  return db.transaction(async (tx) => {
-    const [row] = await tx
-      .insert(designUpdates)
-      .values({ projectId: input.projectId, update: input.update, userId: input.userId })
-      .returning({ id: designUpdates.id })
-    const [design] = await tx
-      .update(designs)
-      .set({ revision: sql`${designs.revision} + 1`, updatedAt: new Date(), updatedBy: input.userId })
-      .where(eq(designs.projectId, input.projectId))
-      .returning({ revision: designs.revision, updatedAt: designs.updatedAt })
-    if (!design) throw new Error(`design of project ${input.projectId} is gone`)
-    return { id: row.id, revision: design.revision, updatedAt: design.updatedAt }
-  })
+  const result = await db.execute<{ id: string; revision: number; updated_at: string | Date }>(sql`
+    with logged as (
+      insert into ${designUpdates} (project_id, update, user_id)
+      values (${input.projectId}, ${Buffer.from(input.update.buffer, input.update.byteOffset, input.update.byteLength)}, ${input.userId})
+      returning id
+    )
+    update ${designs} set revision = revision + 1, updated_at = now(), updated_by = ${input.userId}
+    where project_id = ${input.projectId}
+    returning (select id from logged) as id, revision, updated_at`)
+  const row = result.rows[0]
+  if (!row) throw new Error(`design of project ${input.projectId} is gone`)
+  return { id: Number(row.id), revision: row.revision, updatedAt: new Date(row.updated_at) }
 }
 
 /**
