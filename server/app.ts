@@ -14,6 +14,7 @@ import type { Mailer } from './mail/mailer'
 import { createAnalyzeRouter } from './modules/analyze/analyze.routes'
 import { authRoutes } from './modules/auth/auth.routes'
 import { designsRoutes } from './modules/designs/designs.routes'
+import { devicesRoutes } from './modules/devices/devices.routes'
 import { designImportRoutes } from './modules/exports/designImport.routes'
 import { exportsRoutes } from './modules/exports/exports.routes'
 import { shareLinksRoutes } from './modules/shares/shareLinks.routes'
@@ -69,6 +70,7 @@ export function createApp({ db, config, mailer, hub = createDocumentHub({ db }),
   api.use('/shared', sharedRoutes(deps))
   api.use('/projects', projectsRoutes(deps))
   api.use('/members', membersRoutes(deps))
+  api.use('/devices', devicesRoutes(deps))
   api.use('/invitations', invitationsRoutes(deps))
   api.use('/outbox', outboxRoutes(deps))
   // Any signed-in role may analyse (the router defines POST /analyze itself).

@@ -9,6 +9,7 @@ import type { Role } from '../../shared/api/roles'
 import { createDemoDesign } from '../../shared/design/demo'
 import { designRevisions, invitations } from '../../server/db/schema'
 import { newOneTimeToken } from '../../server/security/one-time-tokens'
+import { insertDevice } from '../../server/modules/devices/devices.repository'
 import { createMember, createOrganization, createProject, TEST_PASSWORD, uniqueEmail, type TestOrganization } from '../helpers/factories'
 import { apiClient, freshSessionClient, signedInClient, type Api, type HttpMethod } from '../helpers/http'
 import { startTestServer, type TestServer } from '../helpers/server'
@@ -54,6 +55,15 @@ async function freshInvitation(): Promise<string> {
     .returning({ id: invitations.id })
   return row.id
 }
+
+/** An invented datasheet device of organisation A (device library), inserted directly. */
+const DEVICE = {
+  name: 'Matrix fuse 20 A', kind: 'fuse' as const, ratingA: 20, dcVoltageRatingV: 32, interruptingRatingA: 2000,
+  ignitionProtected: false, timeDelay: false, source: 'invented test points',
+  points: [{ currentA: 27, minMeltS: 120, maxClearS: 1800 }, { currentA: 70, minMeltS: 0.1, maxClearS: 0.5 }],
+}
+const freshDevice = async () => (await insertDevice(server.db, orgA.id, orgA.owner.id, DEVICE)).id
+const NON_CLIENT: Role[] = ['owner', 'designer', 'reviewer']
 
 /** A revision (the demo design) of the project, inserted directly. */
 async function freshRevision(projectId: string): Promise<string> {
@@ -166,6 +176,30 @@ const ROUTES: RouteCase[] = [
   {
     method: 'get', path: '/api/outbox', allowed: ['owner'], success: 200, resource: false, projectScoped: false,
     target: async () => ({ url: '/api/outbox' }),
+  },
+  {
+    method: 'get', path: '/api/devices', allowed: NON_CLIENT, success: 200, resource: false, projectScoped: false,
+    target: async () => ({ url: '/api/devices' }),
+  },
+  {
+    method: 'post', path: '/api/devices', allowed: ['owner', 'designer'], success: 201, resource: false, projectScoped: false,
+    target: async () => ({ url: '/api/devices', body: DEVICE }),
+  },
+  {
+    method: 'post', path: '/api/devices/import-csv', allowed: ['owner', 'designer'], success: 201, resource: false, projectScoped: false,
+    target: async () => ({ url: '/api/devices/import-csv', body: { ...DEVICE, points: undefined, csv: 'currentA,minMeltS,maxClearS\n27,120,1800\n70,0.1,0.5\n' } }),
+  },
+  {
+    method: 'get', path: '/api/devices/:id', allowed: NON_CLIENT, success: 200, resource: true, projectScoped: false,
+    target: async () => ({ url: `/api/devices/${await freshDevice()}` }),
+  },
+  {
+    method: 'patch', path: '/api/devices/:id', allowed: ['owner', 'designer'], success: 200, resource: true, projectScoped: false,
+    target: async () => ({ url: `/api/devices/${await freshDevice()}`, body: { name: 'Matrix fuse, renamed' } }),
+  },
+  {
+    method: 'delete', path: '/api/devices/:id', allowed: ['owner', 'designer'], success: 204, resource: true, projectScoped: false,
+    target: async () => ({ url: `/api/devices/${await freshDevice()}` }),
   },
   {
     method: 'post', path: '/api/analyze', allowed: ALL_ROLES, success: 200, resource: false, projectScoped: false,
