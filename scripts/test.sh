@@ -7,6 +7,7 @@ bash scripts/setup.sh --test || { echo "0 passed, 1 failed"; exit 1; }
 source .data/env
 export DATABASE_URL=${DATABASE_URL%/*}/ampwright_test
 export NODE_ENV=test
+export AMPWRIGHT_BCRYPT_COST=10
 mkdir -p .data/test-output
 
 extra_passed=0; extra_failed=0

@@ -105,7 +105,8 @@ export function loadConfig(env: Env = process.env, overrides: Partial<AppConfig>
     dataDir,
     clientDir: path.join(REPO_ROOT, 'dist'),
     serveClient: false,
-    bcryptCost: 12,
+    // bcrypt work factor: 12 by default; never below 10. The test run sets 10 to keep sign-ups quick.
+    bcryptCost: Math.max(10, intFrom(env, 'AMPWRIGHT_BCRYPT_COST', 12)),
     jsonBodyLimit: '5mb',
     loginRateLimit: { max: 10, windowMs: 15 * 60 * 1000 },
     resetRateLimit: { max: 5, windowMs: 60 * 60 * 1000 },
