@@ -49,13 +49,13 @@ describe('POST /api/auth/signup', () => {
     expect(me.body.user.email).toBe(body.email)
   })
 
-  it('stores a bcrypt hash of cost 12 (at least 10), never the password', async () => {
+  it('stores a bcrypt hash of the configured cost (at least 10), never the password', async () => {
     const body = signUpBody()
     await apiClient(server.baseUrl).post('/api/auth/signup', body).expect(201)
     const [row] = await server.db.select().from(users).where(eq(users.email, body.email))
     expect(row.passwordHash).toMatch(/^\$2[aby]\$\d\d\$/)
     expect(bcryptCostOf(row.passwordHash)).toBeGreaterThanOrEqual(10)
-    expect(bcryptCostOf(row.passwordHash)).toBe(12)
+    expect(bcryptCostOf(row.passwordHash)).toBe(server.config.bcryptCost)
     expect(row.passwordHash).not.toContain(body.password)
   })
 
