@@ -8,13 +8,13 @@ export const GENERAL_CAUTION =
   'jurisdiction and licensed practice prevail.'
 
 /** Strings above this open-circuit voltage get a shock-hazard caution (common practice: 60 V DC is the
- * usual upper bound of touch-safe extra-low voltage in dry locations, after IEC 61140 / IEC 60364-4-41 ELV). */
+ * usual upper bound of touch-safe extra-low voltage in dry locations; IEC 60364-4-41 ELV band recalled, unverified). */
 export const PV_CAUTION_ABOVE_V = 60
 
 export const LITHIUM_CAUTION =
   "Lithium batteries: their fault current can exceed what common fuses interrupt; follow the battery maker's " +
   'instructions for its BMS, main fuse (interrupting rating), charging limits, ventilation and installation ' +
-  '(ABYC E-13 for boats; common practice elsewhere).'
+  '(common practice; for boats see ABYC E-13, recalled).'
 
 /** String open-circuit voltage at the record low: N × Voc × (1 + β/100 × (Tmin − 25 °C)) (NEC 690.7(A), coefficient method). */
 export function stringVocAtRecordLowV(p: {
