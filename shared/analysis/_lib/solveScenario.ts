@@ -4,6 +4,7 @@ import type { OperatingPoint } from '../../solver/circuit'
 import { compileCircuit, type CompiledCircuit, type PreparedDesign } from '../compileCircuit'
 import type { Finding, ScenarioResult } from '../types'
 import { finite } from './finite'
+import type { TerminalNodes } from './terminalNodes'
 import { compileProblemFindings, solverProblemFindings } from './solverFindings'
 
 export interface ScenarioSolve {
@@ -29,6 +30,22 @@ const TWO_TERMINALS: Record<string, [string, string]> = {
   'fuse-panel': ['in-pos', 'in-neg'],
 }
 
+/** Per part, the nodes of its two main terminals (−1 when it has none), built once per analysis. */
+const PAIR_CACHE = new WeakMap<TerminalNodes, Int32Array>()
+function partPairNodes(design: Design, nodes: TerminalNodes): Int32Array {
+  let pairs = PAIR_CACHE.get(nodes)
+  if (pairs && pairs.length === 2 * design.parts.length) return pairs
+  pairs = new Int32Array(2 * design.parts.length).fill(-1)
+  design.parts.forEach((part, i) => {
+    const pair = TWO_TERMINALS[part.type]
+    if (!pair) return
+    pairs![2 * i] = nodes.nodeOf.get(`${part.id}:${pair[0]}`) ?? -1
+    pairs![2 * i + 1] = nodes.nodeOf.get(`${part.id}:${pair[1]}`) ?? -1
+  })
+  PAIR_CACHE.set(nodes, pairs)
+  return pairs
+}
+
 /** Compile, solve and read back one scenario. Never throws for a parsed design. */
 export function solveScenario(design: Design, scenario: Scenario, prepared: PreparedDesign): ScenarioSolve {
   const compiled = compileCircuit(design, scenario, prepared)
@@ -46,9 +63,7 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
     const k = islandOf[neg]
     if (k >= 0 && !refSet[k]) { refV[k] = finite(v[neg] ?? 0); refSet[k] = 1 }
   }
-  const terminals: Record<string, number> = {}
   const referenced = (n: number | undefined) => (n === undefined ? 0 : finite((v[n] ?? 0) - (islandOf[n] >= 0 ? refV[islandOf[n]] : 0)))
-  for (const [key, n] of compiled.nodes.nodeOf) terminals[key] = referenced(n)
 
   const conductorCurrentA = new Float64Array(design.conductors.length)
   const conductors = design.conductors.map((c, i) => {
@@ -77,12 +92,14 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
     const hash = id.indexOf('#')
     if (hash > 0) panelCurrent.set(id.slice(0, hash), (panelCurrent.get(id.slice(0, hash)) ?? 0) + current)
   }
-  const parts = design.parts.map((part) => {
+  const pairs = partPairNodes(design, compiled.nodes)
+  const parts = design.parts.map((part, i) => {
     const e = compiled.partElement.get(part.id)
     const currentA = e !== undefined ? finite(op.elementCurrentA[e]) : (panelCurrent.get(part.id) ?? 0)
     partCurrentA.set(part.id, currentA)
-    const pair = TWO_TERMINALS[part.type]
-    const voltageV = pair ? (voltageAcross(part.id, pair[0], pair[1]) ?? 0) : 0
+    const a = pairs[2 * i]
+    const b = pairs[2 * i + 1]
+    const voltageV = a >= 0 && b >= 0 && a < v.length && b < v.length ? finite(v[a]) - finite(v[b]) : 0
     return { id: part.id, currentA, powerW: e !== undefined ? finite(op.elementPowerW[e]) : 0, voltageV }
   })
 
@@ -107,6 +124,22 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
   const status: ScenarioResult['status'] = op.status !== 'ok' ? 'not-converged' : broken ? 'failed' : 'ok'
   return {
     scenario, compiled, op, conductorCurrentA, deviceCurrentA, partCurrentA, voltageAcross, findings,
-    result: { id: scenario.id, name: scenario.name, status, conductors, parts, terminals },
+    result: scenarioResult({ id: scenario.id, name: scenario.name, status, conductors, parts }, () => {
+      // Built on first read (the editor, JSON and postMessage read it; the rules never do): one key per terminal.
+      const terminals: Record<string, number> = {}
+      for (const [key, n] of compiled.nodes.nodeOf) terminals[key] = referenced(n)
+      return terminals
+    }),
   }
+}
+
+/** A scenario result whose `terminals` record is an enumerable property computed once, when first read. */
+function scenarioResult(base: Omit<ScenarioResult, 'terminals'>, build: () => Record<string, number>): ScenarioResult {
+  let terminals: Record<string, number> | undefined
+  return Object.defineProperty(base, 'terminals', {
+    enumerable: true,
+    configurable: true,
+    get: () => (terminals ??= build()),
+    set: (value: Record<string, number>) => { terminals = value },
+  }) as ScenarioResult
 }

@@ -19,13 +19,26 @@ export function deviceBand(familyId: string, ratingA: number): DeviceBand {
   if (typeof ratingA !== 'number' || !Number.isFinite(ratingA) || ratingA <= 0) {
     throw new RangeError(`Device rating must be a positive number of amperes, got ${String(ratingA)}`)
   }
-  return bandFromDefinition(familyId, ratingA, getTimeCurrentFamily(familyId).bandAt(ratingA))
+  // Catalogue bands depend only on (family, rating) and are immutable: the analysis asks for the same
+  // few thousand times per design, so each is built once.
+  const key = `${familyId}|${ratingA}`
+  let band = CATALOGUE_BANDS.get(key)
+  if (band === undefined) {
+    band = bandFromDefinition(familyId, ratingA, getTimeCurrentFamily(familyId).bandAt(ratingA))
+    if (CATALOGUE_BANDS.size >= CATALOGUE_BANDS_MAX) CATALOGUE_BANDS.clear()
+    CATALOGUE_BANDS.set(key, band)
+  }
+  return band
 }
+const CATALOGUE_BANDS = new Map<string, DeviceBand>()
+const CATALOGUE_BANDS_MAX = 2000
 
 /** A band from a definition in multiples of `ratingA` (catalogue families and datasheet devices alike). */
 export function bandFromDefinition(familyId: string, ratingA: number, def: BandDefinition): DeviceBand {
   const minMeltS = (currentA: number) => minTimeS(def, currentA / ratingA)
   const maxClearS = (currentA: number) => maxTimeS(def, currentA / ratingA)
+  // Chart points only when a chart asks for them (the checks read the curves, not the samples).
+  let points: DeviceBand['points'] | undefined
   return {
     familyId,
     ratingA,
@@ -33,7 +46,9 @@ export function bandFromDefinition(familyId: string, ratingA: number, def: BandD
     timeDelay: def.timeDelay,
     minMeltS,
     maxClearS,
-    points: chartPoints(def, ratingA, minMeltS, maxClearS),
+    get points() {
+      return (points ??= chartPoints(def, ratingA, minMeltS, maxClearS))
+    },
     floor: def.floor,
     instantaneous: def.instantaneous,
     source: def.source,
