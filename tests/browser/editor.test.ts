@@ -18,6 +18,7 @@ let context: BrowserContext
 let page: Page
 let profileDir: string
 const pageErrors: string[] = []
+const serverErrors: string[] = []
 
 const suffix = Math.random().toString(36).slice(2, 8)
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000, interval: 100 })
@@ -81,6 +82,9 @@ beforeAll(async () => {
   })
   page = context.pages()[0] ?? (await context.newPage())
   page.on('pageerror', (err) => pageErrors.push(err.message))
+  page.on('response', (res) => {
+    if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
+  })
   await page.goto(server.baseUrl)
   await api('post', '/auth/signup', {
     name: 'Ines Harrow',
@@ -176,5 +180,6 @@ describe('design editor in the browser', () => {
     await shot('editor-shortcuts')
     await page.keyboard.press('Escape')
     expect(pageErrors).toEqual([])
+    expect(serverErrors).toEqual([])
   })
 })
