@@ -9,6 +9,7 @@ export const listProjects = (query: Partial<z.output<typeof projectListQuerySche
 export const getProject = (id: string) => http.get<Project>(byId(id))
 export const createProject = (input: ProjectInput) => http.post<Project>('/projects', input)
 export const updateProject = (id: string, update: ProjectUpdate) => http.patch<Project>(byId(id), update)
+export const createDemoProject = () => http.post<Project>('/projects/demo')
 export const duplicateProject = (id: string) => http.post<Project>(`${byId(id)}/duplicate`)
 export const deleteProject = (id: string) => http.delete(byId(id))
 

@@ -99,6 +99,11 @@ export const useProjectsStore = defineStore('projects', () => {
     refreshIfShown()
     return project
   }
+  async function createDemo(): Promise<Project> {
+    const project = remember(await projectsApi.createDemoProject())
+    refreshIfShown()
+    return project
+  }
   async function remove(id: string): Promise<void> {
     await projectsApi.deleteProject(id)
     delete byId.value[id]
@@ -119,6 +124,7 @@ export const useProjectsStore = defineStore('projects', () => {
     create,
     update,
     duplicate,
+    createDemo,
     remove,
   }
 })

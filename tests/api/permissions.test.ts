@@ -108,6 +108,10 @@ const ROUTES: RouteCase[] = [
     method: 'post', path: '/api/projects', allowed: ['owner', 'designer'], success: 201, resource: false, projectScoped: false,
     target: async () => ({ url: '/api/projects', body: { name: 'Matrix', installationKind: 'vessel', nominalVoltageV: 12 } }),
   },
+  {
+    method: 'post', path: '/api/projects/demo', allowed: ['owner', 'designer'], success: 201, resource: false, projectScoped: false,
+    target: async () => ({ url: '/api/projects/demo' }),
+  },
   projectRoute('get', '/api/projects/:id', ALL_ROLES, 200, async (id) => ({ url: `/api/projects/${id}` })),
   projectRoute('patch', '/api/projects/:id', ['owner', 'designer'], 200, async (id) => ({
     url: `/api/projects/${id}`,

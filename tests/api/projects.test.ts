@@ -73,6 +73,22 @@ describe('POST /api/projects', () => {
   })
 })
 
+describe('POST /api/projects/demo', () => {
+  it('creates the invented demo system as a project whose design opens with findings', async () => {
+    const res = await designer.post('/api/projects/demo')
+    expect(res.status).toBe(201)
+    expect(res.body).toMatchObject({ installationKind: 'vehicle', nominalVoltageV: 24, archived: false })
+    const design = await designer.get(`/api/projects/${res.body.id}/design`)
+    expect(design.status).toBe(200)
+    expect(design.body.design.parts.length).toBeGreaterThan(10)
+    const analysis = await designer.post('/api/analyze', { design: design.body.design })
+    expect(analysis.status).toBe(200)
+    // The demo is meant to teach: at least two real findings (see shared/design/demo.ts).
+    const serious = analysis.body.findings.filter((f: { severity: string }) => f.severity !== 'info')
+    expect(serious.length).toBeGreaterThanOrEqual(2)
+  })
+})
+
 describe('GET /api/projects: search, sort, pagination, archive filter', () => {
   let listOrg: TestOrganization
   let api: Api

@@ -11,6 +11,7 @@ import { requirePermission } from '../../http/auth'
 import type { RouteDeps } from '../../http/route-deps'
 import { validate } from '../../http/validate'
 import {
+  createDemoProject,
   createProject,
   duplicateProject,
   editProject,
@@ -47,6 +48,10 @@ export function projectsRoutes(deps: RouteDeps): Router {
   const createInput = validate({ body: projectInputSchema })
   router.post('/', requirePermission('project.write'), createInput, async (req, res) => {
     res.status(201).json(await createProject(db, actorOf(req), createInput.data(req).body))
+  })
+
+  router.post('/demo', requirePermission('project.write'), async (req, res) => {
+    res.status(201).json(await createDemoProject(db, actorOf(req)))
   })
 
   const byId = validate({ params: projectParams })

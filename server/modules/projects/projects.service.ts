@@ -22,6 +22,7 @@ import {
 } from './projects.repository'
 import { findMemberInOrganization } from '../members/members.repository'
 import { deleteShare, insertShare, listShares } from './project-shares.repository'
+import { createDemoDesign } from '../../../shared/design/demo'
 
 export function toProject(row: ProjectRow): Project {
   return {
@@ -61,6 +62,26 @@ export async function createProject(db: Db, actor: Actor, input: z.output<typeof
       createdBy: actor.userId,
       values: input,
       document: emptyDesignFor(input),
+    }),
+  )
+  return getProject(db, actor, id)
+}
+
+/** The invented demo system as a new project of the actor's organisation: what new users open first. */
+export async function createDemoProject(db: Db, actor: Actor) {
+  const design = createDemoDesign()
+  const id = await db.transaction((tx) =>
+    insertProjectWithDesign(tx, {
+      organizationId: actor.organizationId,
+      createdBy: actor.userId,
+      values: {
+        name: design.name,
+        clientName: 'Demo (invented)',
+        installationKind: 'vehicle',
+        nominalVoltageV: design.settings.nominalVoltageV,
+        notes: 'An invented 24 V expedition-truck system to explore: open its design to see live findings.',
+      },
+      document: design,
     }),
   )
   return getProject(db, actor, id)
