@@ -12,7 +12,7 @@ import { connectDatabase } from '../../server/db/client'
 import { createMailer } from '../../server/mail/mailer'
 
 const config = loadConfig(process.env, { serveClient: false })
-const database = connectDatabase(config.databaseUrl, { max: 10 })
+const database = connectDatabase(config.databaseUrl, { max: Number(process.env.COLLAB_DB_POOL) || 10 })
 // No mail is sent by these tests: an address nothing listens on.
 const mailer = createMailer({ ...config.smtp, host: '127.0.0.1', port: 9 })
 const compactEvery = Number(process.env.COLLAB_COMPACT_EVERY) || undefined
