@@ -8,7 +8,7 @@ import {
   readDesignFromDoc,
   writeDesignToDoc,
   type DesignMutations,
-} from '@/components/editor/model/designDoc'
+} from '@shared/collab/designYDoc'
 
 export interface DesignDocHandle {
   doc: Y.Doc
