@@ -115,15 +115,20 @@ export const markerLabelPlugin: Plugin<'line'> = {
       ctx.save()
       ctx.font = '500 11px Roboto, sans-serif'
       ctx.fillStyle = (d.borderColor as string) ?? '#222'
+      // A white halo keeps the text readable over grid lines and bands.
+      ctx.strokeStyle = 'rgba(255, 255, 255, 0.92)'
+      ctx.lineWidth = 4
+      ctx.lineJoin = 'round'
+      const write = (text: string, tx: number, ty: number) => (ctx.strokeText(text, tx, ty), ctx.fillText(text, tx, ty))
       if (d.data.length === 1) {
         const y = scales.y.getPixelForValue(first.y)
         ctx.textAlign = x > chartArea.right - 160 ? 'right' : 'left'
-        ctx.fillText(d.markerText, x + (ctx.textAlign === 'right' ? -12 : 12), y - 8)
+        write(d.markerText, x + (ctx.textAlign === 'right' ? -12 : 12), y - 8)
       } else {
-        ctx.translate(x + 4, chartArea.top + 6)
+        ctx.translate(x + 5, chartArea.top + 6)
         ctx.rotate(Math.PI / 2)
         ctx.textBaseline = 'bottom'
-        ctx.fillText(d.markerText, 0, 0)
+        write(d.markerText, 0, 0)
       }
       ctx.restore()
     })
@@ -168,7 +173,8 @@ export function timeCurrentConfig(view: TimeCurrentView, options: { footer?: str
       },
       plugins: {
         title: { display: true, text: `Time-current: ${view.title}`, font: { size: 15, weight: 500 }, color: '#222' },
-        subtitle: { display: !!(options.footer?.length), text: options.footer ?? [], position: 'bottom', align: 'start', font: { size: 10 }, color: '#444', padding: { top: 8 } },
+        // The sources and the caution, printed into the exported PNG only (the page shows them below).
+        subtitle: { display: false, text: options.footer ?? [], position: 'bottom', align: 'start', font: { size: 10 }, color: '#444', padding: { top: 8 } },
         legend: {
           position: 'bottom',
           labels: {

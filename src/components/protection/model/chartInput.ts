@@ -7,6 +7,7 @@ import { conductorSizeLabel, isConductorSizeId } from '@shared/conductors/sizes'
 import { DEVICE_FAMILIES, type DeviceFamilyId } from '@shared/protection/ratings'
 import { hasTimeCurrentModel, timeCurrentChart, type ChartInput } from '@shared/protection/timeCurrent'
 import type { Conductor, Design } from '@shared/design/schema'
+import { ADIABATIC_VALID_UP_TO_S } from '@shared/protection/withstand'
 import type { TimeCurrentView } from './chartView'
 
 // From an open design and its analysis to the inputs of one device's time-current chart: the device and
@@ -123,6 +124,9 @@ export function deviceChartView(design: Design, analysis: AnalysisResult | null,
   }
   try {
     const chart = timeCurrentChart(input)
+    // Every marker inside the current axis (a 5 A load on a 15 A way sits below its half-rating start).
+    const markerA = chart.markers.map((m) => m.currentA).filter((a) => Number.isFinite(a) && a > 0)
+    const currentAxis: [number, number] = [Math.min(chart.axes.currentA[0], ...markerA.map((a) => a / 1.5)), Math.max(chart.axes.currentA[1], ...markerA.map((a) => a * 1.5))]
     const names = new Map([device, ...upstream].map((d) => [d.id, deviceTitle(d)]))
     return {
       ok: true,
@@ -132,13 +136,17 @@ export function deviceChartView(design: Design, analysis: AnalysisResult | null,
         deviceId: device.id,
         series: chart.series.map((s) => ({
           ...s,
+          // The adiabatic relation holds for short faults only: longer times would read as false alarms.
+          points: s.kind === 'damage' ? s.points.filter((p) => p.timeS <= ADIABATIC_VALID_UP_TO_S) : s.points,
           label: s.kind === 'damage' && weakest
-            ? `${conductorTitle(weakest.design)}: insulation damage`
+            ? `${conductorTitle(weakest.design)}: insulation damage (short faults, up to ${ADIABATIC_VALID_UP_TO_S} s)`
             : `${names.get(s.deviceId ?? '') ?? s.deviceId}: ${s.kind === 'min-melt' ? (device.kind === 'breaker' ? 'minimum opening' : 'minimum melting') : 'maximum clearing'}`,
         })),
         markers: chart.markers.map((m) => (m.kind === 'continuous' ? { ...m, label: `Continuous current: ${round(m.currentA)} A` } : m)),
-        axes: chart.axes,
-        notes: weakest ? [] : ['No protected conductor found below this device: no damage curve drawn.'],
+        axes: { currentA: currentAxis, timeS: chart.axes.timeS },
+        notes: weakest
+          ? [`The damage curve is drawn up to ${ADIABATIC_VALID_UP_TO_S} s: beyond a few seconds heat leaves the conductor and the adiabatic relation no longer applies (overloads are the ampacity check's job).`]
+          : ['No protected conductor found below this device: no damage curve drawn.'],
       },
     }
   } catch (error) {

@@ -20,10 +20,10 @@ export const STYLE = {
   damage: { colour: '#B3261E', dash: [12, 4, 3, 4], width: 2.5 } as LineStyle,
   /** Continuous current: dotted. */
   continuous: { colour: '#2D7A4B', dash: [2, 4], width: 2 } as LineStyle,
-  /** Prospective fault currents: dash-dot-dot, then short dashes. */
+  /** Prospective fault currents (at the device, then at the far end): dash-dot-dot, then solid. */
   fault: [
     { colour: '#3C4650', dash: [14, 4, 2, 4, 2, 4], width: 2 },
-    { colour: '#9A5B00', dash: [5, 3], width: 2 },
+    { colour: '#3C4650', dash: [], width: 1.6 },
   ] as LineStyle[],
   /** A start pulse: a filled triangle with a dark outline. */
   start: { colour: '#2B7A78', border: '#102826' },

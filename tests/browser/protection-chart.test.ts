@@ -1,0 +1,111 @@
+// The time-current chart in Debian's chromium against the real server and the built client: the demo
+// design (shared/design/demo.ts, an invented van with a water pump that starts at 6 × its current)
+// is loaded through the API, the fuse panel feeding the pump is selected in the editor and its chart
+// opened; the canvas must be drawn, the PNG export must give a PNG, and no page error may occur.
+import fs from 'node:fs'
+import os from 'node:os'
+import path from 'node:path'
+import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { createDemoDesign } from '../../shared/design/demo'
+import { startTestServer, type TestServer } from '../helpers/server'
+
+const ROOT = path.resolve(import.meta.dirname, '../..')
+const SHOTS = path.join(ROOT, '.data/test-output/screenshots')
+const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
+  '--disable-component-update', '--disable-sync']
+
+let server: TestServer
+let context: BrowserContext
+let page: Page
+let profileDir: string
+const pageErrors: string[] = []
+const serverErrors: string[] = []
+const suffix = Math.random().toString(36).slice(2, 8)
+const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000, interval: 100 })
+
+async function api(method: 'post' | 'get' | 'put', url: string, data?: unknown) {
+  const res = await page.request[method](`${server.baseUrl}/api${url}`, { headers: { Origin: server.baseUrl }, data })
+  expect(res.ok(), `${method} ${url} → ${res.status()} ${await res.text()}`).toBe(true)
+  return res.json()
+}
+
+/** Share of the canvas's pixels that are not white (the plot, its lines and labels). Runs in the page. */
+const INKED_SHARE = `(() => {
+  const c = document.querySelector('[data-test="time-current-canvas"]')
+  const ctx = c.getContext('2d')
+  const { data } = ctx.getImageData(0, 0, c.width, c.height)
+  let inked = 0
+  for (let i = 0; i < data.length; i += 4) if (data[i] < 235 || data[i + 1] < 235 || data[i + 2] < 235) inked++
+  return inked / (data.length / 4)
+})()`
+
+beforeAll(async () => {
+  if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) throw new Error('no client build: run `npx vite build` first')
+  fs.mkdirSync(SHOTS, { recursive: true })
+  server = await startTestServer({ serveClient: true })
+  profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-tcc-'))
+  context = await chromium.launchPersistentContext(profileDir, {
+    executablePath: '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS, viewport: { width: 1440, height: 900 }, acceptDownloads: true,
+  })
+  page = context.pages()[0] ?? (await context.newPage())
+  page.on('pageerror', (err) => pageErrors.push(err.message))
+  page.on('response', (res) => {
+    if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
+  })
+  await page.goto(server.baseUrl)
+  await api('post', '/auth/signup', {
+    name: 'Odile Brack', email: `odile.${suffix}@brack-marine.test`, password: 'heat-shrink-and-lugs', organizationName: `Brack Mobile Power ${suffix}`,
+  })
+})
+
+afterAll(async () => {
+  await context?.close()
+  await server?.close()
+  if (profileDir) fs.rmSync(profileDir, { recursive: true, force: true })
+})
+
+describe('time-current chart in the editor', () => {
+  it('draws the chart of the fuse feeding the water pump, exports it as PNG, without page errors', async () => {
+    const project = await api('post', '/projects', { name: `Pump circuit ${suffix}`, installationKind: 'vehicle', nominalVoltageV: 24 })
+    const { revision } = await api('get', `/projects/${project.id}/design`)
+    await api('put', `/projects/${project.id}/design`, { design: createDemoDesign(), baseRevision: revision })
+
+    await page.goto(`${server.baseUrl}/projects/${project.id}/design`)
+    await page.locator('.editor-canvas').waitFor()
+    await page.locator('.vue-flow__node[data-id="panel"]').click()
+    const open = page.locator('[data-test="open-time-current"]')
+    await open.waitFor()
+    // The analysis runs in a worker: wait for the panel's figures before opening the chart.
+    await poll(() => page.locator('.part-inspector__figures').textContent()).toMatch(/Way 3: fault current\s*[\d.,\s]+\sA/)
+    await open.click()
+
+    const dialog = page.locator('[data-test="time-current-dialog"]')
+    await dialog.waitFor()
+    // The first way feeding a load with a start comes first: way 1, the fridge (demo.ts); choose the pump's way 3.
+    const device = dialog.locator('[data-test="chart-device"]')
+    await poll(() => device.textContent()).toContain('Habitation fuse panel, way 1 (10 A)')
+    await device.click()
+    await page.getByRole('option', { name: 'Habitation fuse panel, way 3 (15 A)' }).click()
+    await poll(() => device.textContent()).toContain('Habitation fuse panel, way 3 (15 A)')
+    await page.locator('[data-test="time-current-canvas"]').waitFor()
+    await poll(() => page.evaluate(INKED_SHARE) as Promise<number>).toBeGreaterThan(0.05)
+    const text = (await dialog.textContent()) ?? ''
+    expect(text).toContain('ISO 8820-3')
+    expect(text).toContain('ICEA P-32-382')
+    expect(text).toMatch(/authority having\s+jurisdiction/)
+    expect(text).not.toMatch(/NaN|undefined|Infinity/)
+
+    await dialog.screenshot({ path: path.join(SHOTS, 'time-current-motor-circuit.png') })
+
+    const [download] = await Promise.all([page.waitForEvent('download'), dialog.locator('[data-test="export-png"]').click()])
+    expect(download.suggestedFilename()).toBe('time-current-habitation-fuse-panel-way-3-15-a.png')
+    const file = await download.path()
+    const png = fs.readFileSync(file)
+    expect([...png.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])
+    fs.copyFileSync(file, path.join(SHOTS, 'time-current-motor-circuit-export.png'))
+
+    expect(pageErrors).toEqual([])
+    expect(serverErrors).toEqual([])
+  })
+})
