@@ -1,6 +1,6 @@
 import { PART_CATALOGUE } from '@shared/design/catalogue'
 import { conductorSchema, type Conductor, type Design } from '@shared/design/schema'
-import type { DesignMutations } from './designDoc'
+import type { DesignMutations } from '@shared/collab/designYDoc'
 import type { FindingPatch } from './analysisTypes'
 import { validateParamEdit } from './paramFields'
 
