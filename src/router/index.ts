@@ -13,6 +13,7 @@ const routes: RouteRecordRaw[] = [
   { path: '/projects/:id', name: 'project', component: () => import('@/views/projects/ProjectView.vue'), meta: { action: 'project.read', title: 'Project' } },
   { path: '/projects/:id/design', name: 'design', component: () => import('@/views/editor/DesignEditorView.vue'), meta: { action: 'project.read', layout: 'bare', title: 'Design' } },
   { path: '/members', name: 'members', component: () => import('@/views/members/MembersView.vue'), meta: { action: 'member.read', title: 'Members' } },
+  { path: '/devices', name: 'devices', component: () => import('@/views/devices/DeviceLibraryView.vue'), meta: { action: 'project.readAll', title: 'Device library' } },
   { path: '/outbox', name: 'outbox', component: () => import('@/views/outbox/OutboxView.vue'), meta: { action: 'outbox.read', title: 'Mail outbox' } },
   { path: '/s/:token', name: 'shared-design', component: () => import('@/views/share/SharedDesignView.vue'), meta: { public: true, layout: 'bare', title: 'Shared design' } },
   { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { public: true, title: 'Not found' } },
