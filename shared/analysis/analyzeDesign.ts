@@ -1,4 +1,5 @@
 import type { Conductor, Design, PartOf } from '../design/schema'
+import { createSolverCache } from '../solver/solverCache'
 import type { PreparedDesign } from './compileCircuit'
 import { buildPassiveCircuit } from './_lib/passiveCircuit'
 import { conductorStats } from './_lib/conductorStats'
@@ -51,7 +52,7 @@ export function analyzeDesign(design: Design, options: AnalyzeOptions = {}): Ana
 function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
   const nodes = buildTerminalNodes(design)
   const devices = protectiveDevices(design)
-  const prepared: PreparedDesign = { nodes, devices, passive: buildPassiveCircuit(design, nodes, devices) }
+  const prepared: PreparedDesign = { nodes, devices, passive: buildPassiveCircuit(design, nodes, devices), solverCache: createSolverCache() }
   const topology = protectionTopology(design, nodes, devices)
   const findings: Finding[] = []
 

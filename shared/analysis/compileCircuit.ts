@@ -1,6 +1,7 @@
 
 import type { Design, Part, PartOf, Scenario } from '../design/schema'
 import type { Circuit, CircuitElement } from '../solver/circuit'
+import type { SolverCache } from '../solver/solverCache'
 import { protectiveDevices, type ProtectiveDevice } from './_lib/devices'
 import { finite } from './_lib/finite'
 import { buildPassiveCircuit, type PassiveCircuit } from './_lib/passiveCircuit'
@@ -41,6 +42,8 @@ export interface PreparedDesign {
   nodes: TerminalNodes
   devices: ProtectiveDevice[]
   passive?: PassiveCircuit
+  /** Matrix structure shared by every scenario's solve and the fault study (same nodes, loads differ). */
+  solverCache?: SolverCache
 }
 
 /** A scenario with nothing running and no charging: the circuit of batteries and wiring only. */

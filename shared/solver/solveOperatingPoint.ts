@@ -1,9 +1,9 @@
 import type { Circuit, OperatingPoint, SolverProblem } from './circuit'
 import { buildElementTable, CPOWER, ISOURCE, VSOURCE, reportedCurrent } from './_lib/elementTable'
 import { solveNodal } from './_lib/newton'
-import { buildNodalSystem } from './_lib/nodalSystem'
 import { circuitShapeError, prepareNetwork } from './_lib/prepareNetwork'
 import { findCollapsedSources, findShortedSources, findSourceLoops } from './_lib/sourceChecks'
+import { nodalSystemFor, type SolverCache } from './solverCache'
 
 export type { Circuit, CircuitElement, Island, OperatingPoint, SolverProblem } from './circuit'
 
@@ -22,6 +22,8 @@ export interface OperatingPointOptions {
   sourceLoopFraction?: number
   /** ... or by more than this current (default: no limit). */
   sourceLoopLimitA?: number
+  /** Matrix structure shared with earlier solves on the same nodes (createSolverCache). */
+  cache?: SolverCache
 }
 
 /**
@@ -57,7 +59,7 @@ export function solveOperatingPoint(circuit: Circuit, options: OperatingPointOpt
   const table = buildElementTable(elements, active)
   const stamps = new Uint8Array(elements.length)
   for (let e = 0; e < elements.length; e++) stamps[e] = active[e] && table.kind[e] !== ISOURCE ? 1 : 0
-  const system = buildNodalSystem(nodeCount, elements, stamps, isUnknown)
+  const system = nodalSystemFor(options.cache, nodeCount, elements, stamps, isUnknown)
   const nodeVoltageV = new Float64Array(nodeCount)
   const outcome = solveNodal(system, table, nodeVoltageV, {
     maxIterations: Math.max(1, Math.floor(options.maxIterations ?? 100)),

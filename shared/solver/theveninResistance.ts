@@ -1,8 +1,9 @@
 import type { Circuit } from './circuit'
 import { buildElementTable } from './_lib/elementTable'
 import { solveNodal } from './_lib/newton'
-import { buildNodalSystem, type NodalSystem } from './_lib/nodalSystem'
+import type { NodalSystem } from './_lib/nodalSystem'
 import { circuitShapeError, prepareNetwork } from './_lib/prepareNetwork'
+import { nodalSystemFor, type SolverCache } from './solverCache'
 
 export interface FaultLocation {
   id: string
@@ -36,13 +37,13 @@ export interface FaultCurrent {
  *   { kind: 'resistor', id: 'cable', a: 1, b: 2, resistanceOhm: 0.02 },
  * ] }, [{ id: 'end', a: 2, b: 0 }]) // [{ id: 'end', resistanceOhm: 0.03, openCircuitV: 12, currentA: 400 }]
  */
-export function faultCurrents(circuit: Circuit, faults: FaultLocation[]): FaultCurrent[] {
+export function faultCurrents(circuit: Circuit, faults: FaultLocation[], options: { cache?: SolverCache } = {}): FaultCurrent[] {
   const none = (id: string): FaultCurrent => ({ id, resistanceOhm: Number.POSITIVE_INFINITY, openCircuitV: 0, currentA: 0 })
   if (circuitShapeError(circuit) !== null) return faults.map((f) => none(f.id))
   const { elements, nodeCount } = circuit
   const prepared = prepareNetwork(circuit, (el) => el.kind === 'resistor' || el.kind === 'vsource')
   const table = buildElementTable(elements, prepared.active)
-  const system = buildNodalSystem(nodeCount, elements, prepared.active, prepared.isUnknown)
+  const system = nodalSystemFor(options.cache, nodeCount, elements, prepared.active, prepared.isUnknown)
   const openCircuitV = new Float64Array(nodeCount)
   // Without loads the system is linear: after this call system.factor holds L D Lᵀ of the network.
   const outcome = solveNodal(system, table, openCircuitV, { maxIterations: 1, toleranceV: 1e-9, toleranceA: 1e-9 })

@@ -1,4 +1,4 @@
-import { conductorResistanceOhm } from '../../conductors/resistance'
+import { resistancePerMetreOhm } from '../../conductors/resistance'
 import type { Conductor, DesignSettings } from '../../design/schema'
 import { finite } from './finite'
 
@@ -13,19 +13,28 @@ export function conductorTemperatureC(c: Conductor, settings: DesignSettings): n
   return c.ambientC ?? settings.defaultAmbientC
 }
 
-/** Resistance of one conductor at its operating temperature; null when the tables refuse the input. */
+/**
+ * Resistance of one conductor at its operating temperature; null when the tables refuse the input.
+ * Ω/m depends only on size, material and temperature — a handful of combinations per design — so it
+ * is looked up once per combination (the table functions also build their source text every call).
+ */
 export function conductorOhm(c: Conductor, settings: DesignSettings): number | null {
-  try {
-    const r = conductorResistanceOhm({
-      sizeId: c.sizeId,
-      material: c.material,
-      lengthM: c.lengthM,
-      temperatureC: conductorTemperatureC(c, settings),
-    })
-    return Number.isFinite(r) && r > 0 ? r : null
-  } catch {
-    return null
+  if (!(Number.isFinite(c.lengthM) && c.lengthM >= 0)) return null
+  const temperatureC = conductorTemperatureC(c, settings)
+  const key = `${c.sizeId}|${c.material}|${temperatureC}`
+  let perM = OHM_PER_M.get(key)
+  if (perM === undefined) {
+    try {
+      perM = resistancePerMetreOhm({ sizeId: c.sizeId, material: c.material, temperatureC })
+    } catch {
+      perM = Number.NaN
+    }
+    if (OHM_PER_M.size >= 4096) OHM_PER_M.clear()
+    OHM_PER_M.set(key, perM)
   }
+  const r = perM * c.lengthM
+  return Number.isFinite(r) && r > 0 ? r : null
 }
+const OHM_PER_M = new Map<string, number>()
 
 export { finite }

@@ -43,7 +43,7 @@ export function faultStudy(design: Design, prepared: PreparedDesign, topology: P
 
   const deviceFaultA = new Map<string, number>()
   const conductorFarEndA = new Map<string, number>()
-  for (const f of faultCurrents(compiled.circuit, faults)) {
+  for (const f of faultCurrents(compiled.circuit, faults, { cache: prepared.solverCache })) {
     const amps = finite(f.currentA)
     if (f.id.startsWith('d:')) deviceFaultA.set(f.id.slice(2), amps)
     else conductorFarEndA.set(f.id.slice(2), amps)

@@ -8,12 +8,21 @@ export function familyId(family: string): DeviceFamilyId | undefined {
 
 /** Largest device a conductor may have under the design's profile; null when the tables refuse the input. */
 export function maxDeviceRating(c: Conductor, ampacityA: number, profile: Design['settings']['profile'], family: string): MaxOcpdResult | null {
+  // Few distinct inputs per design (sizes × ampacities × families), asked per device by several rules.
+  const key = `${c.sizeId}|${c.material}|${ampacityA}|${profile}|${family}`
+  const known = LIMITS.get(key)
+  if (known !== undefined) return known
+  let result: MaxOcpdResult | null
   try {
-    return maxOcpdA({ sizeId: c.sizeId, material: c.material, ampacityA: Math.max(0, ampacityA), profile, family: familyId(family) })
+    result = Object.freeze(maxOcpdA({ sizeId: c.sizeId, material: c.material, ampacityA: Math.max(0, ampacityA), profile, family: familyId(family) }))
   } catch {
-    return null
+    result = null
   }
+  if (LIMITS.size >= 4096) LIMITS.clear()
+  LIMITS.set(key, result)
+  return result
 }
+const LIMITS = new Map<string, MaxOcpdResult | null>()
 
 /**
  * Where a branch device may sit from the bus or panel it is tapped from (m): ABYC E-11 §11.10, 7 in

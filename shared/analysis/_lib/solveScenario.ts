@@ -49,7 +49,7 @@ function partPairNodes(design: Design, nodes: TerminalNodes): Int32Array {
 /** Compile, solve and read back one scenario. Never throws for a parsed design. */
 export function solveScenario(design: Design, scenario: Scenario, prepared: PreparedDesign): ScenarioSolve {
   const compiled = compileCircuit(design, scenario, prepared)
-  const op = solveOperatingPoint(compiled.circuit)
+  const op = solveOperatingPoint(compiled.circuit, { cache: prepared.solverCache })
   const v = op.nodeVoltageV
   const nodeV = (n: number | undefined) => (n === undefined || n >= v.length ? null : finite(v[n]))
   const nominalV = design.settings.nominalVoltageV

@@ -159,3 +159,54 @@ export function stampConductance(system: NodalSystem, e: number, g: number): voi
   }
   if (slotPQ[e] >= 0) ax[slotPQ[e]] -= g
 }
+
+/** Slot of every off-diagonal (row, column) pair of a system's pattern, keyed row · n + column. */
+const PAIR_SLOTS = new WeakMap<NodalSystem, Map<number, number>>()
+function pairSlots(system: NodalSystem): Map<number, number> {
+  let slots = PAIR_SLOTS.get(system)
+  if (slots) return slots
+  slots = new Map()
+  const { n, ap, ai } = system
+  for (let c = 0; c < n; c++) for (let p = ap[c] + 1; p < ap[c + 1]; p++) slots.set(ai[p] * n + c, p)
+  PAIR_SLOTS.set(system, slots)
+  return slots
+}
+
+/**
+ * The same matrix structure for another circuit on the same nodes: when its unknowns are the same and
+ * every conductance it stamps falls on a slot of `previous` (loads switched off leave structural zeros,
+ * which change no value of the factorisation), the ordering, pattern and symbolic analysis of
+ * `previous` are reused and only the element slots are recomputed. Null when the structure differs.
+ */
+export function reuseNodalSystem(
+  previous: NodalSystem,
+  nodeCount: number,
+  elements: CircuitElement[],
+  stamps: Uint8Array,
+  isUnknown: Uint8Array,
+): NodalSystem | null {
+  const { unknownOfNode, n, ap } = previous
+  if (unknownOfNode.length !== nodeCount) return null
+  for (let node = 0; node < nodeCount; node++) if ((unknownOfNode[node] >= 0) !== (isUnknown[node] === 1)) return null
+  const m = elements.length
+  const slotPP = new Int32Array(m).fill(-1)
+  const slotQQ = new Int32Array(m).fill(-1)
+  const slotPQ = new Int32Array(m).fill(-1)
+  const slots = pairSlots(previous)
+  for (let e = 0; e < m; e++) {
+    if (!stamps[e]) continue
+    const p = firstNode(elements[e])
+    const q = secondNode(elements[e])
+    if (p === q) continue
+    const a = unknownOfNode[p]
+    const b = unknownOfNode[q]
+    if (a >= 0) slotPP[e] = ap[a]
+    if (b >= 0) slotQQ[e] = ap[b]
+    if (a >= 0 && b >= 0 && a !== b) {
+      const slot = slots.get(a < b ? a * n + b : b * n + a)
+      if (slot === undefined) return null
+      slotPQ[e] = slot
+    }
+  }
+  return { ...previous, slotPP, slotQQ, slotPQ }
+}
