@@ -109,3 +109,32 @@ describe('time-current chart in the editor', () => {
     expect(serverErrors).toEqual([])
   })
 })
+
+describe('device library in the browser', () => {
+  it('adds a device from datasheet points with a live band preview, flagging a bad point at its cell', async () => {
+    await page.goto(`${server.baseUrl}/devices`)
+    await page.locator('[data-test="add-device"]').click()
+    const form = page.locator('[data-test="device-form"]')
+    await form.waitFor()
+    await form.locator('[data-field="name"] input').fill('Workshop strip fuse 20 A')
+    await form.locator('[data-field="ratingA"] input').fill('20')
+    await form.locator('[data-field="source"] input').fill('Maker datasheet rev. B, figure 2 (invented)')
+    // Invented points; the second current is lower than the first (a typing slip) until corrected.
+    const cells = (row: number) => form.locator('[data-test="points-table"] tbody tr').nth(row).locator('input')
+    const points = [['27', '120', '1800'], ['24', '0.8', '5']]
+    for (const [row, values] of points.entries()) for (const [col, value] of values.entries()) await cells(row).nth(col).fill(value)
+    await form.locator('[data-test="save-device"]').click()
+    await poll(() => form.textContent()).toContain('Currents must rise from one point to the next')
+    await cells(1).nth(0).fill('40')
+    await page.getByRole('button', { name: 'Add point' }).click()
+    for (const [col, value] of ['200', '0.003', '0.02'].entries()) await cells(2).nth(col).fill(value)
+    await form.locator('[data-test="time-current-canvas"]').waitFor()
+    await poll(() => page.evaluate(INKED_SHARE) as Promise<number>).toBeGreaterThan(0.03)
+    await page.screenshot({ path: path.join(SHOTS, 'device-library-form.png') })
+    await form.locator('[data-test="save-device"]').click()
+    await poll(() => page.locator('[data-test="devices-table"]').textContent()).toContain('Workshop strip fuse 20 A')
+    expect(await page.locator('[data-test="devices-table"]').textContent()).toContain('20 A')
+    expect(pageErrors).toEqual([])
+    expect(serverErrors).toEqual([])
+  })
+})

@@ -46,7 +46,7 @@ export function datasheetView(band: DeviceBand, name: string): TimeCurrentView {
   const lowA = currents.length ? Math.min(...currents) : band.ratingA
   const highA = currents.length ? Math.max(...currents) : band.ratingA
   const id = band.familyId
-  const title = `${name} (${band.ratingA} A)`
+  const title = name.includes(`${band.ratingA} A`) ? name : `${name} (${band.ratingA} A)`
   return {
     title,
     subtitle: 'Datasheet points',
