@@ -31,9 +31,10 @@ export interface DesignDocHandle {
  * Opens a design in a fresh Y.Doc (one per design) with an undo manager over local edits.
  * A later co-editing provider attaches to `doc`; remote updates flow through the same observers.
  */
-export function useDesignDoc(initial: Design): DesignDocHandle {
-  const doc = new Y.Doc()
-  writeDesignToDoc(doc, initial)
+export function useDesignDoc(initial: Design | { doc: Y.Doc }): DesignDocHandle {
+  // A live design arrives as a synced Y.Doc (the server's state); a local one is written in.
+  const doc = 'doc' in initial ? initial.doc : new Y.Doc()
+  if (!('doc' in initial)) writeDesignToDoc(doc, initial)
   const design = shallowRef<Design>(readDesignFromDoc(doc))
   const electricalVersion = ref(0)
   const version = ref(0)

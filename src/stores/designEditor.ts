@@ -6,6 +6,7 @@ import type { Design } from '@shared/design/schema'
 import { useDesignDoc, type DesignDocHandle } from '@/composables/useDesignDoc'
 import { useDesignAnalysis, type DesignAnalysis } from '@/composables/useDesignAnalysis'
 import { useDesignSave } from '@/composables/useDesignSave'
+import type { CollabConnection } from '@/composables/useCollabProvider'
 import type { AnalysisResult, Finding } from '@/components/editor/model/analysisTypes'
 import { indexAnalysis, type AnalysisIndex } from '@/components/editor/model/analysisIndex'
 
@@ -17,6 +18,8 @@ export interface OpenDesignOptions {
   /** Off in component tests (no Worker); on in the app. */
   analyze?: boolean
   save?: boolean
+  /** A live connection whose synced Y.Doc holds the design; HTTP saving is then off. */
+  collab?: CollabConnection | null
 }
 
 export interface Selection {
@@ -30,6 +33,7 @@ export const useDesignEditorStore = defineStore('designEditor', () => {
   const handle = shallowRef<DesignDocHandle | null>(null)
   const analysis = shallowRef<DesignAnalysis | null>(null)
   const saver = shallowRef<SaveApi | null>(null)
+  const collab = shallowRef<CollabConnection | null>(null)
   const canEdit = ref(false)
   const projectId = ref<string | null>(null)
   const selection = ref<Selection>({ partIds: [], conductorIds: [] })
@@ -42,10 +46,11 @@ export const useDesignEditorStore = defineStore('designEditor', () => {
     close()
     scope = effectScope(true)
     scope.run(() => {
-      const doc = useDesignDoc(options.design)
+      const doc = useDesignDoc(options.collab ? { doc: options.collab.doc } : options.design)
       handle.value = markRaw(doc)
+      collab.value = options.collab ? markRaw(options.collab) : null
       if (options.analyze !== false) analysis.value = markRaw(useDesignAnalysis(doc.design, doc.electricalVersion))
-      if (options.save !== false && options.projectId) {
+      if (options.save !== false && options.projectId && !options.collab) {
         saver.value = markRaw(
           useDesignSave({
             projectId: options.projectId,
@@ -59,13 +64,15 @@ export const useDesignEditorStore = defineStore('designEditor', () => {
     })
     canEdit.value = options.canEdit
     projectId.value = options.projectId
-    scenarioId.value = options.design.scenarios[0]?.id ?? null
+    scenarioId.value = (handle.value?.design.value ?? options.design).scenarios[0]?.id ?? null
     selection.value = { partIds: [], conductorIds: [] }
   }
 
   function close(): void {
     scope?.stop()
     scope = null
+    collab.value?.destroy()
+    collab.value = null
     handle.value?.dispose()
     handle.value = null
     analysis.value = null
@@ -76,17 +83,24 @@ export const useDesignEditorStore = defineStore('designEditor', () => {
   const result = computed<AnalysisResult | null>(() => analysis.value?.result.value ?? null)
   const index = computed<AnalysisIndex>(() => indexAnalysis(result.value, scenarioId.value))
   const findings = computed<Finding[]>(() => result.value?.findings ?? [])
-  const saveState = computed(() => saver.value?.state.value ?? (canEdit.value ? 'saved' : 'read-only'))
+  // Live: the server stores each update as it arrives, so "saved" follows the connection.
+  const saveState = computed(() => {
+    if (!canEdit.value) return 'read-only'
+    if (collab.value) return collab.value.status.value === 'live' ? 'saved' : 'unsaved'
+    return saver.value?.state.value ?? 'saved'
+  })
 
   function select(next: Partial<Selection>, options: { focus?: boolean } = {}): void {
     selection.value = { partIds: next.partIds ?? [], conductorIds: next.conductorIds ?? [] }
     if (options.focus) focusRequest.value++
+    collab.value?.setSelection([...selection.value.partIds, ...selection.value.conductorIds])
   }
 
   return {
     handle,
     analysis,
     saver,
+    collab,
     canEdit,
     projectId,
     selection,
