@@ -1,0 +1,93 @@
+// Live co-editing in two chromium pages against the real server, the built client and the real
+// /collab endpoint: a designer's edit appears on a reviewer's page, each sees the other in the
+// presence strip, and the reviewer's page offers no editing.
+import fs from 'node:fs'
+import os from 'node:os'
+import path from 'node:path'
+import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { startTestServer, type TestServer } from '../helpers/server'
+import { TEST_PASSWORD, createOrganization, createProject, type TestOrganization, type TestUser } from '../helpers/factories'
+
+const ROOT = path.resolve(import.meta.dirname, '../..')
+const SHOTS = path.join(ROOT, '.data/test-output/screenshots')
+const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
+  '--disable-component-update', '--disable-sync']
+
+let server: TestServer
+let organization: TestOrganization
+let projectId: string
+const contexts: BrowserContext[] = []
+const profileDirs: string[] = []
+const pageErrors: string[] = []
+
+const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000, interval: 100 })
+
+/** A signed-in page of its own browser profile (its own session cookie). */
+async function openAs(user: TestUser): Promise<Page> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-collab-'))
+  profileDirs.push(dir)
+  const context = await chromium.launchPersistentContext(dir, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    args: CHROMIUM_ARGS,
+    viewport: { width: 1280, height: 720 },
+  })
+  contexts.push(context)
+  const page = context.pages()[0] ?? (await context.newPage())
+  page.on('pageerror', (err) => pageErrors.push(`${user.role}: ${err.message}`))
+  await page.goto(server.baseUrl)
+  const res = await page.request.post(`${server.baseUrl}/api/auth/login`, {
+    headers: { Origin: server.baseUrl },
+    data: { email: user.email, password: TEST_PASSWORD },
+  })
+  expect(res.ok(), `login ${user.role} → ${res.status()} ${await res.text()}`).toBe(true)
+  await page.goto(`${server.baseUrl}/projects/${projectId}/design`)
+  await page.locator('.editor-canvas').waitFor()
+  return page
+}
+
+const nodes = (page: Page) => page.locator('.vue-flow__node')
+
+beforeAll(async () => {
+  if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) throw new Error('no client build: run `npx vite build` first')
+  fs.mkdirSync(SHOTS, { recursive: true })
+  server = await startTestServer({ serveClient: true })
+  organization = await createOrganization(server.db, 'Collab')
+  projectId = await createProject(server.db, organization)
+})
+
+afterAll(async () => {
+  for (const context of contexts) await context.close()
+  await server?.close()
+  for (const dir of profileDirs) fs.rmSync(dir, { recursive: true, force: true })
+})
+
+describe('two people on one design', () => {
+  it("shows the designer's edit live on the reviewer's read-only page, with presence", async () => {
+    const designer = await openAs(organization.designer)
+    const reviewer = await openAs(organization.reviewer)
+
+    for (const page of [designer, reviewer]) await poll(() => page.locator('[data-testid="connection-state"]').getAttribute('data-state')).toBe('live')
+    // Each sees the other in the presence strip, by name.
+    await poll(() => designer.locator(`[data-testid="presence-strip"] [data-name="${organization.reviewer.name}"]`).count()).toBe(1)
+    await poll(() => reviewer.locator(`[data-testid="presence-strip"] [data-name="${organization.designer.name}"]`).count()).toBe(1)
+
+    // The designer drops a battery; it appears on the reviewer's canvas without a reload.
+    const before = await nodes(reviewer).count()
+    await designer.locator('.parts-list__item[data-part-type="battery"]').dragTo(designer.locator('.editor-canvas'), { targetPosition: { x: 300, y: 200 } })
+    await poll(() => nodes(designer).count()).toBe(before + 1)
+    await poll(() => nodes(reviewer).count()).toBe(before + 1)
+
+    // The reviewer's page is view-only: read-only state, no dragging parts in.
+    expect(await reviewer.locator('[data-testid="save-state"]').getAttribute('data-state')).toBe('read-only')
+    await reviewer.locator('.parts-list__item[data-part-type="battery"]').dragTo(reviewer.locator('.editor-canvas'), { targetPosition: { x: 500, y: 300 } })
+    await reviewer.waitForTimeout(500)
+    expect(await nodes(reviewer).count()).toBe(before + 1)
+    expect(await nodes(designer).count()).toBe(before + 1)
+
+    await designer.screenshot({ path: path.join(SHOTS, 'collab-designer.png') })
+    await reviewer.screenshot({ path: path.join(SHOTS, 'collab-reviewer.png') })
+    expect(pageErrors).toEqual([])
+  })
+})
