@@ -3,7 +3,7 @@ import { compileCircuit, FAULT_STUDY_SCENARIO } from '../../../shared/analysis'
 import { solveOperatingPoint } from '../../../shared/solver/solveOperatingPoint'
 import { createSolverCache } from '../../../shared/solver/solverCache'
 import { faultCurrents } from '../../../shared/solver/theveninResistance'
-import { generatedDesign } from '../../bench/analysis.bench'
+import { generatedDesign } from '../../helpers/generatedDesign'
 
 // One matrix structure for every scenario of a design: results must be those of a fresh solve
 // (relative 1e-9: only the rounding of a different elimination order may differ).
