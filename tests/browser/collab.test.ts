@@ -79,6 +79,13 @@ describe('two people on one design', () => {
     await poll(() => nodes(designer).count()).toBe(before + 1)
     await poll(() => nodes(reviewer).count()).toBe(before + 1)
 
+    // The designer selects the battery and points at the canvas: the reviewer sees both in the
+    // designer's colour, with the designer's name by the pointer.
+    await nodes(designer).first().click()
+    await designer.mouse.move(700, 400, { steps: 4 })
+    await poll(() => reviewer.locator('[data-testid="remote-selection"]').count()).toBe(1)
+    await poll(() => reviewer.locator('[data-testid="remote-pointer"]').textContent()).toContain(organization.designer.name)
+
     // The reviewer's page is view-only: read-only state, no dragging parts in.
     expect(await reviewer.locator('[data-testid="save-state"]').getAttribute('data-state')).toBe('read-only')
     await reviewer.locator('.parts-list__item[data-part-type="battery"]').dragTo(reviewer.locator('.editor-canvas'), { targetPosition: { x: 500, y: 300 } })
