@@ -40,7 +40,7 @@ export const VOLTAGE_DROP_LIMITS: Readonly<Record<CodeProfile, ProfileDropLimits
   marine: {
     critical: { percent: 3, appliesTo: 'panelboard main feeders, bilge blowers, electronics, navigation lights (ISO 10133 adds bilge pumps)' },
     general: { percent: 10, appliesTo: 'lighting other than navigation lights and other non-critical circuits' },
-    source: 'ABYC E-11 (quoted in an equipment maker\'s FAQ) and ISO 10133 (standards.md §4)',
+    source: 'ABYC E-11 (quoted in an equipment maker\'s FAQ) and ISO 10133',
     status: 'verified',
   },
   vehicle: {

@@ -29,4 +29,4 @@ const LIMITS = new Map<string, MaxOcpdResult | null>()
  * (175 mm), or 40 in (1.02 m) for conductors from sources other than the battery when sheathed
  * (standards.md §4, pkys.com summary). Vehicles and buildings: the same figures, common practice.
  */
-export const BRANCH_DISTANCE_LIMITS = { bareM: 0.178, sheathedM: 1.02, source: 'ABYC E-11 §11.10: within 7 in of the bus, or 40 in (1.02 m) if sheathed (standards.md §4)' } as const
+export const BRANCH_DISTANCE_LIMITS = { bareM: 0.178, sheathedM: 1.02, source: 'ABYC E-11 §11.10: within 7 in of the bus, or 40 in (1.02 m) if sheathed' } as const

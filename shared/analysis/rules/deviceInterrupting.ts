@@ -8,7 +8,7 @@ export const deviceInterruptingRule: Rule = {
   id: 'device-interrupting-rating',
   title: 'Interrupting rating below the fault current',
   severity: 'error',
-  source: 'ABYC E-11 §11.10 interrupting capacity; NEC 110.9 (interrupting rating at least the available fault current); standards.md §7',
+  source: 'ABYC E-11 §11.10 interrupting capacity; NEC 110.9 (interrupting rating at least the available fault current)',
   run(ctx) {
     const findings: Finding[] = []
     for (const d of ctx.devices) {

@@ -8,14 +8,14 @@ import type { Rule, RuleContext } from './types'
  * unsheathed and sheathed/enclosed for the whole run.
  */
 export const PROTECTION_DISTANCE_LIMITS = {
-  marine: { bareM: 0.178, sheathedM: 1.83, source: 'ABYC E-11 §11.10: within 7 in (175 mm) of the battery, or 72 in (1.83 m) if sheathed or enclosed for the whole length (standards.md §4)' },
+  marine: { bareM: 0.178, sheathedM: 1.83, source: 'ABYC E-11 §11.10: within 7 in (175 mm) of the battery, or 72 in (1.83 m) if sheathed or enclosed for the whole length' },
   vehicle: { bareM: 0.178, sheathedM: 1.83, source: 'ABYC E-11 §11.10 distances (7 in / 72 in sheathed) applied to vehicles: common practice' },
   building: { bareM: 0.178, sheathedM: 1.83, source: 'ABYC E-11 §11.10 distances (7 in / 72 in sheathed) used for battery conductors off-grid: common practice' },
 } as const
 
 /** ISO 13297: charging-source conductors protected within the source or within 1.8 m of it; self-limiting sources exempt. */
 export const CHARGING_SOURCE_LIMIT_M = 1.8
-const CHARGING_SOURCE = 'ISO 13297:2020+A1:2022: charging-source conductors protected within 1.8 m of the source; self-limiting sources exempt (standards.md §4)'
+const CHARGING_SOURCE = 'ISO 13297:2020+A1:2022: charging-source conductors protected within 1.8 m of the source; self-limiting sources exempt'
 
 /** Every positive conductor fed by a battery needs a fuse or breaker at its source end. */
 export const protectionMissingRule: Rule = {

@@ -5,7 +5,7 @@ import type { Finding } from '../types'
 import { ratingAtMost, ratingPatch } from './suggest'
 import type { Rule, RuleContext } from './types'
 
-const SOURCE = 'NEC 690.9(A): string fuses unless the current from all other parallel strings, (N − 1) × 1.25 × Isc, is within the module\'s maximum series fuse (worked example, standards.md §6); 690.9(B)'
+const SOURCE = 'NEC 690.9(A): string fuses unless the current from all other parallel strings, (N − 1) × 1.25 × Isc, is within the module\'s maximum series fuse (its informational worked example); 690.9(B)'
 
 interface OwnRegion {
   nodes: Set<number>
