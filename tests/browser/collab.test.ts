@@ -95,6 +95,21 @@ describe('two people on one design', () => {
 
     await designer.screenshot({ path: path.join(SHOTS, 'collab-designer.png') })
     await reviewer.screenshot({ path: path.join(SHOTS, 'collab-reviewer.png') })
+
+    // The designer names a revision; it is listed with its author, and the reviewer sees it too
+    // (without the naming form or restore).
+    await designer.locator('[data-testid="open-revisions"]').click()
+    await designer.locator('[data-testid="revision-name"] input').fill('Issued for review')
+    await designer.locator('[data-testid="revision-save"]').click()
+    const designerRow = designer.locator('[data-testid="revision-list"] .v-list-item').filter({ hasText: 'Issued for review' })
+    await poll(() => designerRow.count()).toBe(1)
+    expect(await designerRow.textContent()).toContain(organization.designer.name)
+    await designer.screenshot({ path: path.join(SHOTS, 'collab-revisions.png') })
+    await reviewer.locator('[data-testid="open-revisions"]').click()
+    await poll(() => reviewer.locator('[data-testid="revision-list"] .v-list-item').filter({ hasText: 'Issued for review' }).count()).toBe(1)
+    expect(await reviewer.locator('[data-testid="revision-name"]').count()).toBe(0)
+    expect(await reviewer.getByRole('button', { name: 'Restore' }).count()).toBe(0)
+
     expect(pageErrors).toEqual([])
   })
 })
