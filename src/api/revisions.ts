@@ -1,4 +1,5 @@
 import type { Revision } from '@shared/api/revisions.schemas'
+import type { DesignDiff } from '@shared/collab/diffDesigns'
 import { http } from './http'
 
 const revisionsPath = (projectId: string) => `/projects/${encodeURIComponent(projectId)}/revisions`
@@ -11,3 +12,9 @@ export const nameRevision = (projectId: string, name: string) => http.post<Revis
 export const restoreRevision = (projectId: string, revisionId: string) =>
   http.post<Revision>(`${revisionsPath(projectId)}/${encodeURIComponent(revisionId)}/restore`, {})
 
+
+export type RevisionComparison = DesignDiff & { from: Revision; to: Revision }
+
+/** What changed from one revision to another, with findings that appeared or cleared. */
+export const compareRevisions = (projectId: string, from: string, to: string) =>
+  http.get<RevisionComparison>(`${revisionsPath(projectId)}/compare?from=${encodeURIComponent(from)}&to=${encodeURIComponent(to)}`)

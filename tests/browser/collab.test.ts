@@ -104,6 +104,21 @@ describe('two people on one design', () => {
     const designerRow = designer.locator('[data-testid="revision-list"] .v-list-item').filter({ hasText: 'Issued for review' })
     await poll(() => designerRow.count()).toBe(1)
     expect(await designerRow.textContent()).toContain(organization.designer.name)
+
+    // A fuse added after that and a second revision: comparing the two lists the added fuse.
+    await designer.getByRole('button', { name: 'Close' }).click()
+    await designer.locator('.parts-list__item[data-part-type="fuse"]').dragTo(designer.locator('.editor-canvas'), { targetPosition: { x: 550, y: 120 } })
+    await poll(() => nodes(designer).count()).toBe(before + 2)
+    await designer.locator('[data-testid="open-revisions"]').click()
+    await designer.locator('[data-testid="revision-name"] input').fill('As built')
+    await designer.locator('[data-testid="revision-save"]').click()
+    await poll(() => designer.locator('[data-testid="revision-list"] .v-list-item').count()).toBe(2)
+    for (const [label, revision] of [['From', 'Issued for review'], ['To', 'As built']]) {
+      await designer.locator('.v-select').filter({ hasText: label }).click()
+      await designer.locator('.v-select__content .v-list-item').filter({ hasText: revision }).click()
+    }
+    await designer.getByRole('button', { name: 'Compare' }).click()
+    await poll(() => designer.locator('[data-testid="revision-comparison"]').textContent()).toContain('Parts added (1)')
     await designer.screenshot({ path: path.join(SHOTS, 'collab-revisions.png') })
     await reviewer.locator('[data-testid="open-revisions"]').click()
     await poll(() => reviewer.locator('[data-testid="revision-list"] .v-list-item').filter({ hasText: 'Issued for review' }).count()).toBe(1)
