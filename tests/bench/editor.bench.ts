@@ -10,6 +10,7 @@ import { chromium, type Page } from 'playwright-core'
 import { makeConductor, makePart } from '../../shared/design/builder'
 import { createEmptyDesign } from '../../shared/design/demo'
 import type { Conductor, Design, Part } from '../../shared/design/schema'
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../helpers/browser'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
 // 10 parts per group → 500, plus the bank and its main fuse (BENCH_GROUPS overrides, for a quick look).
@@ -140,9 +141,9 @@ export async function run(): Promise<void> {
   const server = await startTestServer({ serveClient: true })
   const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-bench-'))
   const context = await chromium.launchPersistentContext(profile, {
-    executablePath: '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-sync'],
+    args: CHROMIUM_ARGS,
     viewport: { width: 1440, height: 900 },
   })
   try {

@@ -8,11 +8,10 @@ import { chromium, type BrowserContext, type Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { startTestServer, type TestServer } from '../helpers/server'
 import { TEST_PASSWORD, createOrganization, createProject, type TestOrganization, type TestUser } from '../helpers/factories'
+import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
-const SHOTS = path.join(ROOT, '.data/test-output/screenshots')
-const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-  '--disable-component-update', '--disable-sync']
+const SHOTS = SCREENSHOTS_DIR
 
 let server: TestServer
 let organization: TestOrganization
@@ -28,7 +27,7 @@ async function openAs(user: TestUser): Promise<Page> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-collab-'))
   profileDirs.push(dir)
   const context = await chromium.launchPersistentContext(dir, {
-    executablePath: '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     headless: true,
     args: CHROMIUM_ARGS,
     viewport: { width: 1280, height: 720 },

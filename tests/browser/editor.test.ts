@@ -7,11 +7,10 @@ import path from 'node:path'
 import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { startTestServer, type TestServer } from '../helpers/server'
+import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
-const SHOTS = path.join(ROOT, '.data/test-output/screenshots')
-const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-  '--disable-component-update', '--disable-sync']
+const SHOTS = SCREENSHOTS_DIR
 
 let server: TestServer
 let context: BrowserContext
@@ -74,7 +73,7 @@ beforeAll(async () => {
   server = await startTestServer({ serveClient: true })
   profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-editor-'))
   context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     headless: true,
     args: CHROMIUM_ARGS,
     // The smallest screen the editor is laid out for.

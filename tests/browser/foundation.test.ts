@@ -6,11 +6,10 @@ import path from 'node:path'
 import { chromium, type BrowserContext, type Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { startTestServer, tokenFromLink, type TestServer } from '../helpers/server'
+import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
-const SHOTS = path.join(ROOT, '.data/test-output/screenshots')
-const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-  '--disable-component-update', '--disable-sync']
+const SHOTS = SCREENSHOTS_DIR
 
 let server: TestServer
 let context: BrowserContext
@@ -56,7 +55,7 @@ beforeAll(async () => {
   server = await startTestServer({ serveClient: true })
   profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-pw-'))
   context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     headless: true,
     args: CHROMIUM_ARGS,
     viewport: { width: 1440, height: 900 },
@@ -173,7 +172,7 @@ describe('foundation in the browser', () => {
     const token = tokenFromLink(await server.outbox.latestTo(invitee), '/accept-invitation', server.baseUrl)
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-pw-'))
     const other = await chromium.launchPersistentContext(dir, {
-      executablePath: '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS, viewport: { width: 1280, height: 720 },
+      executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS, viewport: { width: 1280, height: 720 },
     })
     try {
       const colleague = other.pages()[0] ?? (await other.newPage())

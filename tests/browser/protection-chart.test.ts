@@ -9,11 +9,10 @@ import { chromium, type BrowserContext, type Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { createDemoDesign } from '../../shared/design/demo'
 import { startTestServer, type TestServer } from '../helpers/server'
+import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
-const SHOTS = path.join(ROOT, '.data/test-output/screenshots')
-const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-  '--disable-component-update', '--disable-sync']
+const SHOTS = SCREENSHOTS_DIR
 
 let server: TestServer
 let context: BrowserContext
@@ -46,7 +45,7 @@ beforeAll(async () => {
   server = await startTestServer({ serveClient: true })
   profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-tcc-'))
   context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS, viewport: { width: 1440, height: 900 }, acceptDownloads: true,
+    executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS, viewport: { width: 1440, height: 900 }, acceptDownloads: true,
   })
   page = context.pages()[0] ?? (await context.newPage())
   page.on('pageerror', (err) => pageErrors.push(err.message))

@@ -11,11 +11,10 @@ import { createOrganization, createProject, type TestOrganization } from '../hel
 import { freshSessionClient } from '../helpers/http'
 import { SESSION_COOKIE } from '../../server/security/session-token'
 import { startTestServer, type TestServer } from '../helpers/server'
+import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
-const SHOTS = path.join(ROOT, '.data/test-output/screenshots')
-const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-  '--disable-component-update', '--disable-sync']
+const SHOTS = SCREENSHOTS_DIR
 
 let server: TestServer
 let org: TestOrganization
@@ -32,7 +31,7 @@ beforeAll(async () => {
   org = await createOrganization(server.db, 'Share page')
   profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-share-'))
   context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS, viewport: { width: 1366, height: 900 },
+    executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS, viewport: { width: 1366, height: 900 },
   })
   page = context.pages()[0] ?? (await context.newPage())
   page.on('pageerror', (e) => pageErrors.push(e.message))
@@ -90,7 +89,7 @@ describe('share link page', () => {
     const designer = await freshSessionClient(server, { userId: org.designer.id, organizationId: org.id })
     const token = designer.cookie!.split('=').slice(1).join('=')
     const designerContext = await chromium.launchPersistentContext(fs.mkdtempSync(path.join(os.tmpdir(), 'aw-share-d-')), {
-      executablePath: '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS, viewport: { width: 1366, height: 900 },
+      executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS, viewport: { width: 1366, height: 900 },
     })
     try {
       await designerContext.addCookies([{ name: SESSION_COOKIE, value: token, url: server.baseUrl }])
