@@ -2,8 +2,8 @@ import type { AnalysisResult, Finding, Severity } from '../analysis/types'
 import { getConductorSize } from '../conductors/sizes'
 import type { Conductor, Design } from '../design/schema'
 import { designCautions } from './cautions'
-import { INK, MUTED, NEGATIVE, POSITIVE, SEVERITY_COLOURS, textWidth, wrapText, type DiagramModel, type Point, type Primitive } from './diagramPrimitives'
-import { partBox, stubOf, type PartBox } from './partGeometry'
+import { fitText, INK, MUTED, NEGATIVE, POSITIVE, SEVERITY_COLOURS, textWidth, wrapText, wrapTextLines, type DiagramModel, type Point, type Primitive } from './diagramPrimitives'
+import { partBox, stubOf, type PartBox, type PlacedTerminal } from './partGeometry'
 import { partRatingText, partSymbol } from './partSymbols'
 import { titleBlock, titleBlockHeight, TITLE_BLOCK_WIDTH, type TitleBlockInfo } from './titleBlock'
 
@@ -150,21 +150,45 @@ export function conductorLabel(c: Conductor): string {
   return `${size} · ${formatLengthM(c.lengthM)}`
 }
 
+const TITLE_SIZE = 10.5
+const RATING_SIZE = 9
+const TERMINAL_SIZE = 8
+/** Gap between a terminal's dot and its label, and around texts inside the box. */
+const INSET = 5
+
+/** Everything drawn inside a box stays inside it: titles wrap to two lines, other texts are cut with an ellipsis. */
 function partPrimitives(box: PartBox, markNumbersForPart: number[], findings: Finding[]): Primitive[] {
   const { part, x, y, width, height } = box
+  const terminals = [...box.terminals.values()]
   const out: Primitive[] = [{ kind: 'rect', x, y, w: width, h: height, stroke: INK, fill: '#ffffff', strokeWidth: 1.2, radius: 4 }]
-  const title = wrapText(part.label || part.id, 10.5, width - 12).slice(0, 2)
-  title.forEach((text, i) => out.push({ kind: 'text', x: x + width / 2, y: y + 14 + i * 12, text, size: 10.5, bold: true, anchor: 'middle', fill: INK }))
-  const cy = y + Math.max(height / 2, 14 + title.length * 12 + 16)
+  // Terminals on the top or bottom edge label themselves inside the box: keep the title and the rating clear of them.
+  const topRow = terminals.some((t) => t.side === 'top') ? 12 : 0
+  const bottomRow = terminals.some((t) => t.side === 'bottom') ? 12 : 0
+  const title = wrapTextLines(part.label || part.id, TITLE_SIZE, width - 2 * INSET, 2)
+  title.forEach((text, i) => out.push({ kind: 'text', x: x + width / 2, y: y + topRow + 14 + i * 12, text, size: TITLE_SIZE, bold: true, anchor: 'middle', fill: INK }))
+  const cy = y + Math.max(height / 2, topRow + 14 + title.length * 12 + 16)
   out.push(...partSymbol(part, x + width / 2, cy))
-  out.push({ kind: 'text', x: x + width / 2, y: y + height - 8, text: partRatingText(part), size: 9, anchor: 'middle', fill: MUTED })
-  for (const t of box.terminals.values()) {
+  // The rating shares its line with the side terminals' labels near the bottom edge: centre it between them.
+  const ratingY = y + height - 8 - bottomRow
+  const sideLabelWidth = Math.max(0, ...terminals
+    .filter((t) => (t.side === 'left' || t.side === 'right') && Math.abs(t.y + 3 - ratingY) < 11)
+    .map((t) => textWidth(t.label, TERMINAL_SIZE) + INSET + 4))
+  const rating = fitText(partRatingText(part), RATING_SIZE, width - 2 * Math.max(INSET, sideLabelWidth))
+  out.push({ kind: 'text', x: x + width / 2, y: ratingY, text: rating, size: RATING_SIZE, anchor: 'middle', fill: MUTED })
+  const sideRoom = width / 2 - INSET - 4
+  const rowRoom = (t: PlacedTerminal) => {
+    // Top and bottom labels share the edge with their neighbours, one pitch apart.
+    const neighbours = terminals.filter((o) => o.side === t.side && o !== t).map((o) => Math.abs(o.x - t.x))
+    return Math.min(width - 2 * INSET, ...neighbours.map((d) => d - 4))
+  }
+  for (const t of terminals) {
     out.push({ kind: 'circle', cx: t.x, cy: t.y, r: 2.5, stroke: INK, fill: t.polarity === 'negative' ? NEGATIVE : POSITIVE })
-    const inset = t.side === 'left' ? { x: t.x + 5, y: t.y + 3, anchor: 'start' as const }
-      : t.side === 'right' ? { x: t.x - 5, y: t.y + 3, anchor: 'end' as const }
+    const inset = t.side === 'left' ? { x: t.x + INSET, y: t.y + 3, anchor: 'start' as const }
+      : t.side === 'right' ? { x: t.x - INSET, y: t.y + 3, anchor: 'end' as const }
       : t.side === 'top' ? { x: t.x, y: t.y + 11, anchor: 'middle' as const }
       : { x: t.x, y: t.y - 5, anchor: 'middle' as const }
-    out.push({ kind: 'text', ...inset, text: t.label, size: 8, fill: MUTED })
+    const room = t.side === 'left' || t.side === 'right' ? sideRoom : rowRoom(t)
+    out.push({ kind: 'text', ...inset, text: fitText(t.label, TERMINAL_SIZE, room), size: TERMINAL_SIZE, fill: MUTED })
   }
   out.push(...marks(markNumbersForPart, findings, x + width, y))
   return out

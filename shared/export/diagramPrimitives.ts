@@ -51,3 +51,23 @@ export function wrapText(text: string, size: number, maxWidth: number): string[]
   if (line) lines.push(line)
   return lines
 }
+
+const ELLIPSIS = '…'
+
+/** The text cut to fit a width, ending in an ellipsis when anything was cut ('' if not even that fits). */
+export function fitText(text: string, size: number, maxWidth: number): string {
+  if (textWidth(text, size) <= maxWidth) return text
+  const chars = Array.from(text)
+  let keep = Math.max(0, Math.floor(maxWidth / (size * 0.55)) - 1)
+  while (keep > 0 && /\s/.test(chars[keep - 1])) keep--
+  return keep > 0 ? chars.slice(0, keep).join('') + ELLIPSIS : ''
+}
+
+/** wrapText to at most maxLines; the last line ends in an ellipsis when text was left over. Long words are cut too. */
+export function wrapTextLines(text: string, size: number, maxWidth: number, maxLines: number): string[] {
+  const lines = wrapText(text, size, maxWidth)
+  const kept = lines.slice(0, maxLines).map((line) => fitText(line, size, maxWidth))
+  // The next line did not fit after the last kept one, so joining them overflows and fitText adds the ellipsis.
+  if (lines.length > maxLines && kept.length > 0) kept[kept.length - 1] = fitText(`${lines[maxLines - 1]} ${lines[maxLines]}`, size, maxWidth)
+  return kept
+}

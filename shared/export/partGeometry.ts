@@ -1,12 +1,9 @@
-import { partTerminals, type TerminalInfo } from '../design/catalogue'
-import type { Part, PartType } from '../design/schema'
+import type { TerminalInfo } from '../design/catalogue'
+import { nodeGeometry } from '../design/nodeGeometry'
+import type { Part } from '../design/schema'
 
-// Boxes and terminal positions of parts on the exported diagram: terminals spread along the side the
-// catalogue gives them, one pitch apart, so a part drawn at its editor position keeps its wiring.
-
-const PITCH = 32
-const MIN_HEIGHT = 80
-const MIN_WIDTH = 144
+// Boxes and terminal positions of parts on the exported diagram: the editor's own geometry
+// (shared/design/nodeGeometry) placed at the part's editor position, so the export matches the canvas.
 
 export interface PlacedTerminal extends TerminalInfo {
   /** Absolute drawing coordinates. */
@@ -23,23 +20,10 @@ export interface PartBox {
   terminals: Map<string, PlacedTerminal>
 }
 
-function spread(count: number, length: number): number[] {
-  const start = (length - (count - 1) * PITCH) / 2
-  return Array.from({ length: count }, (_, i) => start + i * PITCH)
-}
-
 export function partBox(part: Part): PartBox {
-  const terminals = partTerminals(part as { type: PartType; params: unknown })
-  const sides: Record<TerminalInfo['side'], TerminalInfo[]> = { left: [], right: [], top: [], bottom: [] }
-  for (const t of terminals) sides[t.side].push(t)
-  const width = Math.max(MIN_WIDTH, (Math.max(sides.top.length, sides.bottom.length) + 1) * PITCH)
-  const height = Math.max(MIN_HEIGHT, (Math.max(sides.left.length, sides.right.length) + 1) * PITCH)
+  const { width, height, terminals } = nodeGeometry(part)
   const { x, y } = part.position
-  const placed = new Map<string, PlacedTerminal>()
-  sides.left.forEach((t, i) => placed.set(t.id, { ...t, x, y: y + spread(sides.left.length, height)[i] }))
-  sides.right.forEach((t, i) => placed.set(t.id, { ...t, x: x + width, y: y + spread(sides.right.length, height)[i] }))
-  sides.top.forEach((t, i) => placed.set(t.id, { ...t, x: x + spread(sides.top.length, width)[i], y }))
-  sides.bottom.forEach((t, i) => placed.set(t.id, { ...t, x: x + spread(sides.bottom.length, width)[i], y: y + height }))
+  const placed = new Map<string, PlacedTerminal>(terminals.map((t) => [t.id, { ...t, x: x + t.x, y: y + t.y }]))
   return { part, x, y, width, height, terminals: placed }
 }
 
