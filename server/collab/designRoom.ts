@@ -1,6 +1,7 @@
 // One open design: the Y.Doc holding exactly what is stored, its connected peers and their awareness.
-// Every change goes through one ordered queue: updates are committed to design_updates first and only
-// then applied to the Y.Doc and broadcast, so nothing a peer has seen can be lost by a crash.
+// Every change goes through one ordered queue: updates are committed to design_updates first (group
+// commit with the other open designs) and only then applied to the Y.Doc and broadcast, so nothing a
+// peer has seen can be lost by a crash. Compaction snapshots in the queue and writes beside it.
 import * as encoding from 'lib0/encoding'
 import * as awarenessProtocol from 'y-protocols/awareness'
 import * as syncProtocol from 'y-protocols/sync'
@@ -8,8 +9,9 @@ import * as Y from 'yjs'
 import { readDesignFromDoc } from '../../shared/collab/designYDoc'
 import { MESSAGE_AWARENESS, MESSAGE_SYNC } from '../../shared/collab/protocol'
 import type { Db } from '../db/client'
-import { appendUpdate, compactState } from './designState.repository'
+import { compactState } from './designState.repository'
 import type { LoadedDesignDoc } from './loadDesignDoc'
+import type { UpdateCommitter } from './updateCommitter'
 
 /** A connection as the room sees it. */
 export interface RoomPeer {
@@ -26,7 +28,7 @@ interface Settle {
 }
 
 export interface RoomOptions {
-  /** Fold the log into the compacted state after this many stored updates. */
+  /** Fold the log into the compacted state after this many logged updates. */
   compactEvery: number
 }
 
@@ -48,13 +50,15 @@ export class DesignRoom {
   updatedAt: Date
   private lastUpdateId: number
   private uncompacted: number
+  /** The compaction being written, if any (one at a time). */
+  private compacting: Promise<void> | null = null
   /** Holders: peers and API operations; the hub closes the room when it drops to 0. */
   refs = 0
   closed = false
 
   constructor(
     readonly projectId: string,
-    private readonly db: Db,
+    private readonly storage: { db: Db; committer: UpdateCommitter },
     loaded: LoadedDesignDoc,
     private readonly options: RoomOptions,
   ) {
@@ -65,10 +69,6 @@ export class DesignRoom {
     this.uncompacted = loaded.uncompactedUpdates
     this.awareness = new awarenessProtocol.Awareness(this.doc)
     this.awareness.setLocalState(null)
-    this.doc.on('update', (update: Uint8Array, origin: unknown) => {
-      const out = message(MESSAGE_SYNC, (e) => syncProtocol.writeUpdate(e, update))
-      for (const peer of this.peers.keys()) if (peer !== origin) peer.send(out)
-    })
     this.awareness.on('update', this.onAwareness)
   }
 
@@ -161,7 +161,7 @@ export class DesignRoom {
           await head.run()
           continue
         }
-        // Consecutive updates (from any peers) go into one transaction: one commit for the batch.
+        // Consecutive updates (from any peers) are committed together, one row each.
         let count = 1
         while (count < this.queue.length && this.queue[count].kind === 'update') count++
         const batch = this.queue.splice(0, count) as Extract<QueueEntry, { kind: 'update' }>[]
@@ -178,39 +178,58 @@ export class DesignRoom {
   }
 
   private async store(batch: Extract<QueueEntry, { kind: 'update' }>[]): Promise<void> {
-    const merged = batch.length === 1 ? batch[0].update : Y.mergeUpdates(batch.map((entry) => entry.update))
-    const saved = await appendUpdate(this.db, {
-      projectId: this.projectId,
-      update: merged,
-      userId: batch.at(-1)!.userId,
-    })
-    this.lastUpdateId = saved.id
+    const saved = await this.storage.committer.commit(
+      this.projectId,
+      batch.map((entry) => ({ update: entry.update, userId: entry.userId })),
+    )
+    this.lastUpdateId = saved.lastId
     this.revision = saved.revision
     this.updatedAt = saved.updatedAt
-    this.uncompacted++
-    for (const entry of batch) Y.applyUpdate(this.doc, entry.update, entry.origin)
-    if (this.uncompacted >= this.options.compactEvery) await this.compactInQueue()
-  }
-
-  /** Queue-ordered compaction (periodic and on last disconnect). */
-  compact(): Promise<void> {
-    return this.exclusive(() => this.compactInQueue())
-  }
-
-  private async compactInQueue(): Promise<void> {
-    if (this.uncompacted === 0) return
-    try {
-      await compactState(this.db, {
-        projectId: this.projectId,
-        state: Y.encodeStateAsUpdate(this.doc),
-        throughId: this.lastUpdateId,
-        document: readDesignFromDoc(this.doc),
-      })
-      this.uncompacted = 0
-    } catch (error) {
-      // The log still holds every update: nothing is lost, the next compaction retries.
-      console.error(`[collab] compaction of ${this.projectId} failed:`, (error as Error).message)
+    this.uncompacted += batch.length
+    // The sender's own bytes go out as they came: no re-encoding of the applied transaction.
+    for (const entry of batch) {
+      Y.applyUpdate(this.doc, entry.update, entry.origin)
+      const out = message(MESSAGE_SYNC, (e) => syncProtocol.writeUpdate(e, entry.update))
+      for (const peer of this.peers.keys()) if (peer !== entry.origin) peer.send(out)
     }
+    if (this.uncompacted >= this.options.compactEvery) this.startCompaction()
+  }
+
+  /** Queue-ordered compaction of everything stored so far (on last disconnect and shutdown). */
+  compact(): Promise<void> {
+    return this.exclusive(async () => {
+      await this.compacting
+      this.startCompaction()
+      await this.compacting
+    })
+  }
+
+  /**
+   * Snapshots the state now (the doc holds exactly the log through lastUpdateId) and writes it without
+   * holding the queue: later updates get higher ids and stay in the log.
+   */
+  private startCompaction(): void {
+    if (this.compacting || this.uncompacted === 0) return
+    const folded = this.uncompacted
+    const snapshot = {
+      projectId: this.projectId,
+      state: Y.encodeStateAsUpdate(this.doc),
+      throughId: this.lastUpdateId,
+      document: readDesignFromDoc(this.doc),
+    }
+    this.compacting = compactState(this.storage.db, snapshot)
+      .then(
+        () => {
+          this.uncompacted -= folded
+        },
+        (error: unknown) => {
+          // The log still holds every update: nothing is lost, the next compaction retries.
+          console.error(`[collab] compaction of ${this.projectId} failed:`, (error as Error).message)
+        },
+      )
+      .finally(() => {
+        this.compacting = null
+      })
   }
 
   destroy(): void {

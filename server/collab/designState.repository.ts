@@ -58,23 +58,53 @@ export async function insertInitialState(db: DbOrTx, projectId: string, state: U
   return inserted.length === 1
 }
 
+export interface LoggedUpdate {
+  update: Uint8Array
+  userId: string | null
+}
+
+export interface AppendedDesign {
+  /** Id of the design's newest logged row. */
+  lastId: number
+  revision: number
+  updatedAt: Date
+}
+
+const asBuffer = (bytes: Uint8Array) => Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength)
+
 /**
- * Commits one update to the log and advances the design's revision: one statement (one round trip,
- * one commit), so the write that must finish before a broadcast stays short.
+ * Commits the updates of several designs in one statement — one transaction, one WAL flush — and
+ * advances each design's revision by its number of updates (its last author becomes updated_by).
+ * Each design appears at most once in `batch`. Designs missing from the answer are gone.
  */
-export async function appendUpdate(db: DbOrTx, input: { projectId: string; update: Uint8Array; userId: string | null }) {
-  const result = await db.execute<{ id: string; revision: number; updated_at: string | Date }>(sql`
+export async function appendUpdates(
+  db: DbOrTx,
+  batch: readonly { projectId: string; updates: readonly LoggedUpdate[] }[],
+): Promise<Map<string, AppendedDesign>> {
+  const rows = batch.flatMap((entry) => entry.updates.map((u) => ({ projectId: entry.projectId, u })))
+  const result = await db.execute<{ project_id: string; last_id: string; revision: number; updated_at: string | Date }>(sql`
     with logged as (
       insert into ${designUpdates} (project_id, update, user_id)
-      values (${input.projectId}, ${Buffer.from(input.update.buffer, input.update.byteOffset, input.update.byteLength)}, ${input.userId})
-      returning id
+      select * from unnest(
+        ${sql.param(rows.map((r) => r.projectId))}::uuid[],
+        ${sql.param(rows.map((r) => asBuffer(r.u.update)))}::bytea[],
+        ${sql.param(rows.map((r) => r.u.userId))}::uuid[])
+      returning id, project_id
+    ), per_design as (
+      select project_id, max(id) as last_id, count(*)::int as n from logged group by project_id
     )
-    update ${designs} set revision = revision + 1, updated_at = now(), updated_by = ${input.userId}
-    where project_id = ${input.projectId}
-    returning (select id from logged) as id, revision, updated_at`)
-  const row = result.rows[0]
-  if (!row) throw new Error(`design of project ${input.projectId} is gone`)
-  return { id: Number(row.id), revision: row.revision, updatedAt: new Date(row.updated_at) }
+    update ${designs} as d
+    set revision = d.revision + p.n, updated_at = now(), updated_by = a.user_id
+    from per_design p
+    join unnest(
+      ${sql.param(batch.map((entry) => entry.projectId))}::uuid[],
+      ${sql.param(batch.map((entry) => entry.updates.at(-1)?.userId ?? null))}::uuid[]) as a(project_id, user_id)
+      on a.project_id = p.project_id
+    where d.project_id = p.project_id
+    returning d.project_id, p.last_id, d.revision, d.updated_at`)
+  return new Map(
+    result.rows.map((row) => [row.project_id, { lastId: Number(row.last_id), revision: row.revision, updatedAt: new Date(row.updated_at) }]),
+  )
 }
 
 /**

@@ -4,8 +4,11 @@
 import type { Db } from '../db/client'
 import { DesignRoom, type RoomOptions } from './designRoom'
 import { loadDesignDoc } from './loadDesignDoc'
+import { createUpdateCommitter, type CommitterOptions, type UpdateCommitter } from './updateCommitter'
 
-export const DEFAULT_ROOM_OPTIONS: RoomOptions = { compactEvery: 200 }
+export const DEFAULT_ROOM_OPTIONS: RoomOptions = { compactEvery: 500 }
+/** Three commits in flight cover a slow fsync without taking the API's pool connections. */
+export const DEFAULT_COMMITTER_OPTIONS: CommitterOptions = { maxInFlight: 3, maxRows: 2000 }
 
 export interface DocumentHub {
   /** Opens (or joins) the design's room; undefined if the project has no design. Pair with release(). */
@@ -18,10 +21,13 @@ export interface DocumentHub {
   isOpen(projectId: string): boolean
   /** Waits for queued writes and compacts every open room. */
   close(): Promise<void>
+  /** The group commit of the update log (its counters show how many rows each commit carried). */
+  readonly committer: UpdateCommitter
 }
 
-export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions> }): DocumentHub {
+export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>; committer?: Partial<CommitterOptions> }): DocumentHub {
   const options = { ...DEFAULT_ROOM_OPTIONS, ...deps.options }
+  const committer = createUpdateCommitter(deps.db, { ...DEFAULT_COMMITTER_OPTIONS, ...deps.committer })
   const rooms = new Map<string, { opening: Promise<DesignRoom | undefined>; room?: DesignRoom }>()
 
   async function acquire(projectId: string): Promise<DesignRoom | undefined> {
@@ -31,7 +37,7 @@ export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>
         const created: { opening: Promise<DesignRoom | undefined>; room?: DesignRoom } = {
           opening: loadDesignDoc(deps.db, projectId, { storeConversion: true }).then((loaded) => {
             if (!loaded) return undefined
-            created.room = new DesignRoom(projectId, deps.db, loaded, options)
+            created.room = new DesignRoom(projectId, { db: deps.db, committer }, loaded, options)
             return created.room
           }),
         }
@@ -62,6 +68,7 @@ export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>
   }
 
   return {
+    committer,
     acquire,
     release,
     async withRoom(projectId, fn) {
