@@ -45,18 +45,18 @@ function mountTable(canApply = true) {
 }
 
 const titles = (wrapper: ReturnType<typeof mountTable>['wrapper']) =>
-  wrapper.findAll('tbody tr').map((row) => row.find('.findings-table__title').text())
+  wrapper.findAll('tbody tr[data-row-id]').map((row) => row.find('.findings-table__title').text())
 
 describe('findings table', () => {
   it('lists errors first, then warnings, then notes, with measured against limit', async () => {
     const { wrapper } = mountTable()
     await flushPromises()
     expect(titles(wrapper)).toEqual(['Device will open under normal load', 'Voltage drop above 3 %', 'Terminal not connected'])
-    const firstRow = wrapper.findAll('tbody tr')[0].text()
+    const firstRow = wrapper.findAll('tbody tr[data-row-id]')[0].text()
     expect(firstRow).toContain('Fuse 1')
     expect(firstRow).toContain('20.0\u00a0A / 15.0\u00a0A')
     // A finding without figures shows dashes, never "undefined" or "NaN".
-    const lastRow = wrapper.findAll('tbody tr')[2].text()
+    const lastRow = wrapper.findAll('tbody tr[data-row-id]')[2].text()
     expect(lastRow).toContain('— / —')
     expect(wrapper.text()).not.toMatch(/undefined|NaN/)
   })
@@ -76,7 +76,7 @@ describe('findings table', () => {
   it('asks to select the parts of a clicked finding', async () => {
     const { wrapper, table } = mountTable()
     await flushPromises()
-    await wrapper.findAll('tbody tr')[1].trigger('click')
+    await wrapper.findAll('tbody tr[data-row-id]')[1].trigger('click')
     expect(table.emitted('select')).toEqual([[findings[0]]])
   })
 
