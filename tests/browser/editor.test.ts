@@ -64,7 +64,7 @@ async function setField(key: string, value: string) {
   await input.press('Enter')
 }
 
-const findingRows = () => page.locator('.findings-table tbody tr')
+const findingRows = () => page.locator('.findings-table tbody tr[data-row-id]')
 const fuseFindings = () => findingRows().filter({ hasText: 'Fuse 1' }).filter({ hasText: /Device (will open under normal load|rated below the load)/ })
 
 beforeAll(async () => {
@@ -165,10 +165,10 @@ describe('design editor in the browser', () => {
     await shot('editor-findings')
 
     await page.locator('[data-tab="conductors"]').click()
-    await poll(() => page.locator('.schedule tbody tr').count()).toBeGreaterThan(10)
+    await poll(() => page.locator('.schedule-table tbody tr[data-row-id]').count()).toBeGreaterThan(10)
     await shot('editor-conductor-schedule')
     await page.locator('[data-tab="devices"]').click()
-    await poll(() => page.locator('.schedule tbody tr').count()).toBeGreaterThan(3)
+    await poll(() => page.locator('.schedule-table tbody tr[data-row-id]').count()).toBeGreaterThan(3)
     await shot('editor-device-schedule')
 
     const text = await page.locator('body').innerText()
