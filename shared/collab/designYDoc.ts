@@ -36,7 +36,8 @@ function conductorToY(conductor: Conductor): Y.Map<unknown> {
   return map
 }
 
-function scenarioToY(scenario: Scenario): Y.Map<unknown> {
+/** A scenario as the Y.Map the document holds (also used to add one while editing). */
+export function scenarioToY(scenario: Scenario): Y.Map<unknown> {
   const map = new Y.Map<unknown>()
   for (const [key, value] of Object.entries(scenario)) {
     if (key === 'loads' || value === undefined) continue

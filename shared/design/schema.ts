@@ -105,6 +105,9 @@ export const scenarioLoadSchema = z.object({
   level: quantity('load level', '', { min: 0, max: 1 }).default(1),
 })
 
+/** A load level as a form asks for it, in per cent (the document stores the fraction percent / 100). */
+export const scenarioLevelPercentSchema = quantity('load level', '%', { min: 0, max: 100 })
+
 export const scenarioSchema = z.object({
   id: idSchema,
   name: labelText('scenario name').min(1, 'Enter the scenario name'),
