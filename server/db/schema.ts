@@ -247,6 +247,9 @@ export const shareLinks = pgTable(
     label: text('label').notNull().default(''),
     /** SHA-256 (hex) of the token. */
     tokenHash: text('token_hash').notNull().unique(),
+    /** The token again, AES-256-GCM encrypted with a key derived from the server secret, so the link can be
+     *  e-mailed later (server/modules/shares/shareTokenCipher.ts). Null for links made before this column. */
+    tokenCiphertext: text('token_ciphertext'),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
     expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
     revokedAt: timestamp('revoked_at', { withTimezone: true }),
