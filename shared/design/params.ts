@@ -1,6 +1,7 @@
 import { z } from 'zod'
 import { deviceFamilySchema } from './enums'
 import { choice, flag, quantity } from './fields'
+import { checkCustomDeviceFits, customDeviceSchema } from './customDevice'
 
 // Parameters of each part type, in SI units named in the field (capacityAh, lengthM, dropV…).
 // Limits are plausibility bounds for low-voltage DC systems, chosen to catch typing mistakes
@@ -126,8 +127,10 @@ const protectiveDeviceShape = {
   closed: flag('Closed (not blown or tripped)', 'it is closed (not blown or tripped)').default(true),
   resistanceOhm: contactResistanceOhm,
 }
-export const fuseParamsSchema = z.object(protectiveDeviceShape)
-export const breakerParamsSchema = z.object(protectiveDeviceShape)
+/** A device from the organisation's library, copied in: its band replaces the family's (see customDevice.ts). */
+const withLibraryDevice = { ...protectiveDeviceShape, customDevice: customDeviceSchema.optional() }
+export const fuseParamsSchema = z.object(withLibraryDevice).superRefine((p, ctx) => checkCustomDeviceFits('fuse', p, ctx))
+export const breakerParamsSchema = z.object(withLibraryDevice).superRefine((p, ctx) => checkCustomDeviceFits('breaker', p, ctx))
 
 export const batterySwitchParamsSchema = z.object({
   closed: flag('On', 'the switch is on').default(true),

@@ -1,4 +1,5 @@
 import type { Design } from '../../design/schema'
+import type { CustomDeviceParams } from '../../design/customDevice'
 
 /** A protective device: a fuse, a breaker, or one way of a fuse panel. */
 export interface ProtectiveDevice {
@@ -18,6 +19,8 @@ export interface ProtectiveDevice {
   /** Field an editor patch sets to change the rating, e.g. 'params.ratingA' or 'params.wayRatingsA.2'. */
   ratingField: string
   label: string
+  /** A library device embedded in a fuse or breaker: its band replaces the family's. */
+  customDevice?: CustomDeviceParams
 }
 
 export function protectiveDevices(design: Design): ProtectiveDevice[] {
@@ -30,6 +33,7 @@ export function protectiveDevices(design: Design): ProtectiveDevice[] {
         dcVoltageRatingV: p.dcVoltageRatingV, interruptingRatingA: p.interruptingRatingA,
         ignitionProtected: p.ignitionProtected, closed: p.closed, resistanceOhm: p.resistanceOhm,
         lineTerminal: 'line', loadTerminal: 'load', ratingField: 'params.ratingA', label: part.label || part.id,
+        ...(p.customDevice ? { customDevice: p.customDevice } : {}),
       })
     } else if (part.type === 'fuse-panel') {
       const p = part.params

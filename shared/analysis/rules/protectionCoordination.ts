@@ -24,7 +24,7 @@ export const protectionCoordinationRule: Rule = {
       const farEnds = protectedStats.map((s) => s.faultFarEndA).filter((a) => a > 0)
       const maxRating = weakest?.ampacityA != null ? maxDeviceRating(weakest.conductor, weakest.ampacityA, ctx.profile, d.device.family)?.maxRatingA ?? undefined : undefined
       return {
-        id: d.device.id, partId: d.device.partId, familyId: d.device.family, ratingA: d.device.ratingA,
+        id: d.device.id, partId: d.device.partId, familyId: d.device.family, ratingA: d.device.ratingA, customDevice: d.device.customDevice,
         conductor: weakest ? {
           id: weakest.conductor.id, sizeId: weakest.conductor.sizeId, material: weakest.conductor.material,
           insulationRatingC: weakest.conductor.insulationRatingC, maxDeviceRatingA: maxRating,

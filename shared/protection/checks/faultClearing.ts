@@ -1,6 +1,6 @@
 import { makeFinding } from '../../analysis/findings'
 import type { Finding } from '../../analysis/types'
-import { deviceBand } from '../timeCurrent'
+import { bandOfDevice } from '../timeCurrent'
 import { ICEA_SOURCE, shortCircuitLimit, withstandTimeS } from '../withstand'
 import { amps, seconds } from './_lib/format'
 import { partIdOf, positive, upstreamChain } from './_lib/chain'
@@ -26,7 +26,7 @@ function faultCases(device: ProtectionDevice): Case[] {
   if (!conductor) return []
   const limit = shortCircuitLimit({ insulationRatingC: conductor.insulationRatingC, insulation: conductor.insulation })
   const initialC = conductor.operatingC ?? conductor.insulationRatingC
-  const band = deviceBand(device.familyId, device.ratingA)
+  const band = bandOfDevice(device)
   const cases: Case[] = []
   const positions = [
     ['far end', positive(device.faultCurrentFarEndA)],
@@ -46,7 +46,7 @@ function faultCases(device: ProtectionDevice): Case[] {
 
 /** The first upstream device sure to clear `currentA` within `withinS`, if any (backup protection). */
 function backupFor(device: ProtectionDevice, context: ResolvedContext, currentA: number, withinS: number) {
-  return upstreamChain(device, context.byId).find((up) => deviceBand(up.familyId, up.ratingA).maxClearS(currentA) < withinS)
+  return upstreamChain(device, context.byId).find((up) => bandOfDevice(up).maxClearS(currentA) < withinS)
 }
 
 /**
@@ -64,7 +64,7 @@ export function unclearedFault(device: ProtectionDevice, context: ResolvedContex
 function run(device: ProtectionDevice, context: ResolvedContext): Finding[] {
   const conductor = device.conductor
   if (!conductor) return []
-  const band = deviceBand(device.familyId, device.ratingA)
+  const band = bandOfDevice(device)
   const failing = unclearedFault(device, context)
   if (!failing) return []
   const limit = shortCircuitLimit({ insulationRatingC: conductor.insulationRatingC, insulation: conductor.insulation })

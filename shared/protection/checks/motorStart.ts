@@ -1,7 +1,7 @@
 import { makeFinding } from '../../analysis/findings'
 import type { Finding } from '../../analysis/types'
 import { DEVICE_FAMILY_IDS, getDeviceFamily, standardRatingsA, type DeviceFamilyId } from '../ratings'
-import { deviceBand, getTimeCurrentFamily, hasTimeCurrentModel } from '../timeCurrent'
+import { bandOfDevice, deviceBand, deviceNameOf, getTimeCurrentFamily, hasTimeCurrentModel } from '../timeCurrent'
 import { amps, seconds } from './_lib/format'
 import { partIdOf } from './_lib/chain'
 import { unclearedFault } from './faultClearing'
@@ -25,7 +25,8 @@ function ratingsOf(familyId: string): readonly number[] {
 /** The replacement carries the start and still clears the conductor's faults in time. */
 function fits(device: ProtectionDevice, familyId: string, ratingA: number, pulse: Pulse, context: ResolvedContext): boolean {
   if (!(deviceBand(familyId, ratingA).minMeltS(pulse.currentA) > pulse.durationS)) return false
-  return unclearedFault({ ...device, familyId, ratingA }, context) === null
+  // The replacement is a generic device of that family: a library device's own band no longer applies.
+  return unclearedFault({ ...device, familyId, ratingA, customDevice: undefined }, context) === null
 }
 
 /**
@@ -74,7 +75,7 @@ function checkStart(device: ProtectionDevice, start: LoadStart, context: Resolve
   // Start data that are not finite positive numbers describe no pulse (the design schema rejects them).
   const usable = [start.runningCurrentA, start.inrushMultiple, start.startDurationS].every((v) => Number.isFinite(v) && v > 0)
   if (!usable) return null
-  const band = deviceBand(device.familyId, device.ratingA)
+  const band = bandOfDevice(device)
   const startA = (device.baseCurrentA ?? 0) + start.inrushMultiple * start.runningCurrentA
   const minOpenS = band.minMeltS(startA)
   if (minOpenS > start.startDurationS) return null
@@ -84,7 +85,11 @@ function checkStart(device: ProtectionDevice, start: LoadStart, context: Resolve
   const nextRating = nextRatingThatRides(device, pulse, context)
   const ideas = [
     alternative ? `use a time-delay device: ${getTimeCurrentFamily(alternative).label}, ${amps(device.ratingA)}` : null,
-    nextRating ? `use the next rating the conductor allows that rides through: ${amps(nextRating)}` : null,
+    nextRating
+      ? device.customDevice
+        ? `use a generic ${getTimeCurrentFamily(device.familyId).label} of the next rating the conductor allows that rides through: ${amps(nextRating)}`
+        : `use the next rating the conductor allows that rides through: ${amps(nextRating)}`
+      : null,
   ].filter(Boolean)
   return makeFinding({
     ruleId: RULE_ID,
@@ -93,7 +98,7 @@ function checkStart(device: ProtectionDevice, start: LoadStart, context: Resolve
     message:
       `Start of ${start.loadId}: ${amps(startA)} (${start.inrushMultiple} × ${amps(start.runningCurrentA)}` +
       `${device.baseCurrentA ? ` + ${amps(device.baseCurrentA)} of other loads` : ''}) for ${seconds(start.startDurationS)}. ` +
-      `The device (${getTimeCurrentFamily(device.familyId).label}, ${amps(device.ratingA)}) may open after ${seconds(minOpenS)}` +
+      `The device (${deviceNameOf(device, (id) => getTimeCurrentFamily(id).label)}, ${amps(device.ratingA)}) may open after ${seconds(minOpenS)}` +
       `${surelyOpens ? ` and is sure to open within ${seconds(band.maxClearS(startA))}` : ''}.`,
     partIds: [partIdOf(device), start.loadId],
     conductorIds: device.conductor ? [device.conductor.id] : [],

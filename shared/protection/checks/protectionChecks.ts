@@ -1,6 +1,6 @@
 import { makeFinding } from '../../analysis/findings'
 import type { Finding } from '../../analysis/types'
-import { hasTimeCurrentModel } from '../timeCurrent'
+import { embeddedDeviceBand, hasTimeCurrentModel } from '../timeCurrent'
 import { areaCmilOf } from '../withstand'
 import { partIdOf } from './_lib/chain'
 import { autoResetRule } from './autoReset'
@@ -33,6 +33,10 @@ function problemWith(device: ProtectionDevice): string | null {
   if (!hasTimeCurrentModel(device.familyId)) return `${device.id}: no time-current model for device family "${device.familyId}".`
   if (!(isFiniteNumber(device.ratingA) && device.ratingA > 0)) {
     return `${device.id}: ratingA must be a positive number of amperes.`
+  }
+  if (device.customDevice) {
+    const band = embeddedDeviceBand(device.customDevice)
+    if (!band.ok) return `${device.id}: library device "${device.customDevice.name}": ${band.issues[0].path}: ${band.issues[0].message}`
   }
   const c = device.conductor
   if (c) {

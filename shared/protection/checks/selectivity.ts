@@ -1,6 +1,6 @@
 import { makeFinding } from '../../analysis/findings'
 import type { Finding } from '../../analysis/types'
-import { deviceBand, getTimeCurrentFamily } from '../timeCurrent'
+import { bandOfDevice, deviceNameOf, getTimeCurrentFamily } from '../timeCurrent'
 import { amps, seconds } from './_lib/format'
 import { partIdOf, positive, upstreamChain } from './_lib/chain'
 import type { ProtectionDevice, ProtectionRule, ResolvedContext } from './types'
@@ -18,10 +18,10 @@ function downstreamFaultsA(device: ProtectionDevice): number[] {
 function run(device: ProtectionDevice, context: ResolvedContext): Finding[] {
   const faultsA = downstreamFaultsA(device)
   if (faultsA.length === 0) return []
-  const down = deviceBand(device.familyId, device.ratingA)
+  const down = bandOfDevice(device)
   const findings: Finding[] = []
   for (const up of upstreamChain(device, context.byId)) {
-    const upBand = deviceBand(up.familyId, up.ratingA)
+    const upBand = bandOfDevice(up)
     // The first fault position where the upstream device may open before the downstream one has cleared.
     // Neither opening is a fault-clearing problem (faultClearing.ts), not a selectivity one.
     const faultA = faultsA.find((a) => {
@@ -39,7 +39,7 @@ function run(device: ProtectionDevice, context: ResolvedContext): Finding[] {
         title: 'Devices in series are not selective',
         message:
           `For a fault of ${amps(faultA)} below ${device.id}, it may take ${seconds(clearS)} to clear, but the upstream ` +
-          `${up.id} (${getTimeCurrentFamily(up.familyId).label}, ${amps(up.ratingA)}) may open after ${seconds(upMinS)}: ` +
+          `${up.id} (${deviceNameOf(up, (id) => getTimeCurrentFamily(id).label)}, ${amps(up.ratingA)}) may open after ${seconds(upMinS)}: ` +
           'the fault can take out more of the system than the faulty branch.',
         partIds: [partIdOf(device), partIdOf(up)],
         conductorIds: [],

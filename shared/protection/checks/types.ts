@@ -1,6 +1,7 @@
 import type { Finding } from '../../analysis/types'
 import type { Material } from '../../conductors/materials'
 import type { InsulationClass } from '../withstand'
+import type { EmbeddedDevice } from '../timeCurrent/libraryDevice'
 import type { RuleProfile, RuleProfileId } from './profiles'
 
 // Plain inputs of the protection checks: everything the analysis has already worked out (fault
@@ -38,6 +39,8 @@ export interface ProtectionDevice {
   partId?: string
   familyId: string
   ratingA: number
+  /** A library device's own datasheet band, used instead of the family's band when present. */
+  customDevice?: EmbeddedDevice
   /** The conductor this device protects (on its load side). */
   conductor?: ProtectedConductor
   /** Prospective fault current at the device's load terminals (the largest it must clear), A. */

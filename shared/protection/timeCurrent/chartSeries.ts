@@ -1,7 +1,7 @@
 import { shortCircuitLimit, withstandI2tA2s, type WithstandOptions } from '../withstand'
 import type { ProtectedConductor } from '../checks/types'
 import { logSpace } from './_lib/logLog'
-import { deviceBand } from './deviceBand'
+import { bandOfDevice, type EmbeddedDevice } from './libraryDevice'
 import type { ChartPoint } from './types'
 
 // Everything a log–log time-current chart of one device needs, as plain series: its band, the bands
@@ -15,6 +15,8 @@ export interface ChartDevice {
   id: string
   familyId: string
   ratingA: number
+  /** A library device's own points, drawn instead of the family's band. */
+  customDevice?: EmbeddedDevice
 }
 
 export interface ChartSeries {
@@ -46,7 +48,7 @@ export interface ChartInput {
 const inTimeRange = (p: ChartPoint) => Number.isFinite(p.timeS) && p.timeS >= CHART_TIME_RANGE_S[0] && p.timeS <= CHART_TIME_RANGE_S[1]
 
 function bandSeries(device: ChartDevice, currentsA: number[]): ChartSeries[] {
-  const band = deviceBand(device.familyId, device.ratingA)
+  const band = bandOfDevice(device)
   const sample = (fn: (a: number) => number) => currentsA.map((currentA) => ({ currentA, timeS: fn(currentA) })).filter(inTimeRange)
   return [
     { id: `${device.id}:min`, kind: 'min-melt', deviceId: device.id, label: `${device.id} minimum melting`, points: sample(band.minMeltS), source: band.source },
