@@ -112,8 +112,9 @@ export function deviceChartView(design: Design, analysis: AnalysisResult | null,
   const continuousA = analysis && summary ? continuousCurrentA(design, analysis, device, summary.protectsConductorIds) : 0
 
   const input: ChartInput = {
-    device: { id: device.id, familyId: device.family, ratingA: device.ratingA },
-    upstream: upstream.map((d) => ({ id: d.id, familyId: d.family, ratingA: d.ratingA })),
+    // A library device's own points replace its family's band (design field params.customDevice).
+    device: { id: device.id, familyId: device.family, ratingA: device.ratingA, customDevice: device.customDevice },
+    upstream: upstream.map((d) => ({ id: d.id, familyId: d.family, ratingA: d.ratingA, customDevice: d.customDevice })),
     conductor: weakest
       ? { id: weakest.design.id, sizeId: weakest.design.sizeId, material: weakest.design.material, insulationRatingC: weakest.design.insulationRatingC }
       : undefined,
@@ -132,7 +133,7 @@ export function deviceChartView(design: Design, analysis: AnalysisResult | null,
       ok: true,
       view: {
         title: deviceTitle(device),
-        subtitle: familyLabel(device.family),
+        subtitle: device.customDevice ? `${device.customDevice.name} (library device)` : familyLabel(device.family),
         deviceId: device.id,
         series: chart.series.map((s) => ({
           ...s,
