@@ -2,6 +2,7 @@
 // design, a restored revision — goes through its room, so the one ordered queue guards each design.
 // (One server process per database: two processes would each hold their own room.)
 import type { Db } from '../db/client'
+import { createAccessEvents, type AccessEvents } from './accessEvents'
 import { DesignRoom, type RoomOptions } from './designRoom'
 import { loadDesignDoc } from './loadDesignDoc'
 import { createUpdateCommitter, type CommitterOptions, type UpdateCommitter } from './updateCommitter'
@@ -23,6 +24,8 @@ export interface DocumentHub {
   close(): Promise<void>
   /** The group commit of the update log (its counters show how many rows each commit carried). */
   readonly committer: UpdateCommitter
+  /** Member and share changes for open connections (the services emit, the collab server follows). */
+  readonly access: AccessEvents
 }
 
 export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>; committer?: Partial<CommitterOptions> }): DocumentHub {
@@ -69,6 +72,7 @@ export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>
 
   return {
     committer,
+    access: createAccessEvents(),
     acquire,
     release,
     async withRoom(projectId, fn) {

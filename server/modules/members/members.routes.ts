@@ -21,12 +21,17 @@ export function membersRoutes(deps: RouteDeps): Router {
   const roleInput = validate({ params, body: memberRoleUpdateSchema })
   router.patch('/:userId', requirePermission('member.manage'), roleInput, async (req, res) => {
     const { params: p, body } = roleInput.data(req)
-    res.json(await changeMemberRole(db, actorOf(req), p.userId, body.role))
+    const member = await changeMemberRole(db, actorOf(req), p.userId, body.role)
+    // Open live-editing connections of this member take the new role at once.
+    deps.hub.access.emit({ kind: 'memberRole', organizationId: actorOf(req).organizationId, userId: p.userId, role: body.role })
+    res.json(member)
   })
 
   const removeInput = validate({ params })
   router.delete('/:userId', requirePermission('member.manage'), removeInput, async (req, res) => {
-    await removeMember(db, actorOf(req), removeInput.data(req).params.userId)
+    const { userId } = removeInput.data(req).params
+    await removeMember(db, actorOf(req), userId)
+    deps.hub.access.emit({ kind: 'memberRemoved', organizationId: actorOf(req).organizationId, userId })
     res.status(204).end()
   })
 

@@ -88,6 +88,7 @@ export function projectsRoutes(deps: RouteDeps): Router {
   router.delete('/:id/shares/:userId', requirePermission('project.share'), unshareInput, async (req, res) => {
     const { params } = unshareInput.data(req)
     await unshareProject(db, actorOf(req), params.id, params.userId)
+    deps.hub.access.emit({ kind: 'projectShareRemoved', projectId: params.id, userId: params.userId })
     res.status(204).end()
   })
 
