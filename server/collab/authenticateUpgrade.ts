@@ -1,10 +1,13 @@
 // Who may open /collab/<projectId>: the session cookie is checked exactly as requireSession checks it
 // (authenticateSessionToken), the project must be visible to the user (a client: only shared ones;
 // another organisation's project is 404), and the role decides between editing and read-only.
+// A browser cannot read the HTTP status of a refused WebSocket handshake, so refusals about the
+// session or the access are answered in-band: the handshake completes and the socket is closed at
+// once with a 44xx code the app explains. A foreign Origin or a malformed path stays an HTTP refusal.
 import type { IncomingMessage } from 'node:http'
 import { z } from 'zod'
 import { can, type Role } from '../../shared/api/roles'
-import { COLLAB_PATH_PREFIX } from '../../shared/collab/protocol'
+import { COLLAB_CLOSE, COLLAB_PATH_PREFIX } from '../../shared/collab/protocol'
 import type { AppConfig } from '../config'
 import type { Db } from '../db/client'
 import { authenticateSessionToken } from '../modules/auth/sessions'
@@ -16,11 +19,23 @@ export interface CollabAccess {
   user: { id: string; name: string }
   organizationId: string
   role: Role
-  /** Reviewers and clients watch: their document updates are dropped. */
+  /** Reviewers and clients watch: their document updates are dropped. Follows role changes. */
   readOnly: boolean
+  /** When the session ends (the connection is closed with 4401 then). */
+  expiresAt: Date
 }
 
-export type UpgradeCheck = { ok: true; access: CollabAccess } | { ok: false; status: 400 | 401 | 403 | 404; message: string }
+export type UpgradeCheck =
+  | { ok: true; access: CollabAccess }
+  /** `closeCode`: accept the handshake and close with it (the app explains it); otherwise an HTTP status. */
+  | { ok: false; status: 400 | 401 | 403 | 404; message: string; closeCode?: number }
+
+export const CLOSE_MESSAGES = {
+  signIn: 'Sign in to continue',
+  sessionEnded: 'Your session has ended. Sign in again.',
+  accessRemoved: 'You no longer have access to this design',
+  notFound: 'Project not found',
+} as const
 
 const projectIdSchema = z.string().uuid()
 
@@ -65,13 +80,17 @@ export async function authenticateUpgrade(deps: { db: Db; config: AppConfig }, r
     return { ok: false, status: 403, message: 'This connection did not come from the Ampwright app and was refused' }
   }
   const token = cookieValue(req.headers.cookie, SESSION_COOKIE)
-  if (!token) return { ok: false, status: 401, message: 'Sign in to continue' }
+  if (!token) return { ok: false, status: 401, message: CLOSE_MESSAGES.signIn, closeCode: COLLAB_CLOSE.sessionEnded }
   const session = await authenticateSessionToken(deps, token)
-  if (!session.ok) return { ok: false, status: 401, message: 'Your session has ended. Sign in again.' }
+  if (!session.ok) return { ok: false, status: 401, message: CLOSE_MESSAGES.sessionEnded, closeCode: COLLAB_CLOSE.sessionEnded }
   const { auth } = session
   const actor = { userId: auth.user.id, organizationId: auth.organization.id, role: auth.role }
-  if (!can(auth.role, 'project.read')) return { ok: false, status: 403, message: `Your role (${auth.role}) cannot view projects` }
-  if (!(await findVisibleProject(deps.db, actor, projectId))) return { ok: false, status: 404, message: 'Project not found' }
+  if (!can(auth.role, 'project.read')) {
+    return { ok: false, status: 403, message: `Your role (${auth.role}) cannot view projects`, closeCode: COLLAB_CLOSE.accessRemoved }
+  }
+  if (!(await findVisibleProject(deps.db, actor, projectId))) {
+    return { ok: false, status: 404, message: CLOSE_MESSAGES.notFound, closeCode: COLLAB_CLOSE.notFound }
+  }
   return {
     ok: true,
     access: {
@@ -80,6 +99,7 @@ export async function authenticateUpgrade(deps: { db: Db; config: AppConfig }, r
       organizationId: auth.organization.id,
       role: auth.role,
       readOnly: !can(auth.role, 'design.write'),
+      expiresAt: auth.expiresAt,
     },
   }
 }

@@ -1,15 +1,17 @@
 // The /collab/<projectId> WebSocket endpoint on the app's own HTTP server: the upgrade is checked
 // (session, project access, role) before the handshake; refused upgrades get an HTTP status on the
-// raw socket. Accepted sockets join the design's room in the document hub.
+// raw socket, or — for the session or the access — in-band with a 44xx close code the app explains.
+// Accepted sockets join the design's room in the document hub and follow member and share changes.
 import { STATUS_CODES, type IncomingMessage, type Server } from 'node:http'
 import type { Duplex } from 'node:stream'
 import { WebSocketServer } from 'ws'
 import { COLLAB_CLOSE, COLLAB_MAX_PAYLOAD_BYTES } from '../../shared/collab/protocol'
 import type { AppConfig } from '../config'
 import type { Db } from '../db/client'
-import { authenticateUpgrade, collabProjectId } from './authenticateUpgrade'
+import { followAccessChanges } from './accessFollower'
+import { authenticateUpgrade, CLOSE_MESSAGES, collabProjectId } from './authenticateUpgrade'
 import type { DocumentHub } from './documentHub'
-import { connectPeer, type PeerStats } from './peerConnection'
+import { connectPeer, type LivePeer, type PeerStats } from './peerConnection'
 
 export interface CollabServer {
   stats: PeerStats
@@ -28,15 +30,25 @@ function refuse(socket: Duplex, status: number, message: string): void {
 export function attachCollabServer(server: Server, deps: { db: Db; config: AppConfig; hub: DocumentHub }): CollabServer {
   const wss = new WebSocketServer({ noServer: true, maxPayload: COLLAB_MAX_PAYLOAD_BYTES })
   const stats: PeerStats = { droppedUpdates: 0 }
+  const peers = new Set<LivePeer>()
+  const unfollow = followAccessChanges({ db: deps.db, events: deps.hub.access, peers })
 
   async function upgrade(req: IncomingMessage, socket: Duplex, head: Buffer): Promise<void> {
     const check = await authenticateUpgrade(deps, req)
+    if (!check.ok && check.closeCode !== undefined && !socket.destroyed) {
+      const { closeCode, message } = check
+      return wss.handleUpgrade(req, socket, head, (ws) => ws.close(closeCode, message))
+    }
     if (!check.ok) return refuse(socket, check.status, check.message)
     const room = await deps.hub.acquire(check.access.projectId)
-    if (!room) return refuse(socket, 404, 'Project not found')
+    if (!room) return wss.handleUpgrade(req, socket, head, (ws) => ws.close(COLLAB_CLOSE.notFound, CLOSE_MESSAGES.notFound))
     if (socket.destroyed) return deps.hub.release(room)
     wss.handleUpgrade(req, socket, head, (ws) => {
-      connectPeer(ws, room, check.access, stats, () => deps.hub.release(room))
+      const peer = connectPeer(ws, room, check.access, stats, () => {
+        peers.delete(peer)
+        deps.hub.release(room)
+      })
+      peers.add(peer)
     })
   }
 
@@ -54,6 +66,7 @@ export function attachCollabServer(server: Server, deps: { db: Db; config: AppCo
     stats,
     async close() {
       server.off('upgrade', onUpgrade)
+      unfollow()
       const closing = [...wss.clients].map(
         (ws) => new Promise<void>((resolve) => {
           ws.once('close', () => resolve())

@@ -1,16 +1,28 @@
 // One accepted WebSocket on a design's room: reads y-protocols messages in order, lets the read-only
 // filter drop what the role may not send, and answers a sync step 1 only once every update this
 // connection sent before it is stored — so a client's sync step 1 doubles as a "saved" acknowledgement.
+// The access is read on every message, so a role change applies from the next message on.
 import * as decoding from 'lib0/decoding'
+import * as encoding from 'lib0/encoding'
 import type WebSocket from 'ws'
+import * as authProtocol from 'y-protocols/auth'
 import * as awarenessProtocol from 'y-protocols/awareness'
-import { COLLAB_CLOSE, MESSAGE_SYNC } from '../../shared/collab/protocol'
-import type { CollabAccess } from './authenticateUpgrade'
+import { accessNoticeReason, COLLAB_CLOSE, MESSAGE_AUTH, MESSAGE_SYNC } from '../../shared/collab/protocol'
+import { CLOSE_MESSAGES, type CollabAccess } from './authenticateUpgrade'
 import type { DesignRoom, RoomPeer } from './designRoom'
 import { classifyMessage, mayApply } from './readOnlyFilter'
 
 export interface PeerStats {
   droppedUpdates: number
+}
+
+/** An open connection as the access follower sees it. */
+export interface LivePeer {
+  /** Mutable: role changes rewrite role and readOnly. */
+  readonly access: CollabAccess
+  close(code: number, reason: string): void
+  /** Tells the client its role changed (a y-protocols auth message, see accessNoticeReason). */
+  noticeAccess(): void
 }
 
 /**
@@ -27,7 +39,7 @@ function toBytes(data: WebSocket.RawData): Uint8Array {
   return new Uint8Array(data.buffer, data.byteOffset, data.byteLength)
 }
 
-export function connectPeer(ws: WebSocket, room: DesignRoom, access: CollabAccess, stats: PeerStats, onClose: () => void): void {
+export function connectPeer(ws: WebSocket, room: DesignRoom, access: CollabAccess, stats: PeerStats, onClose: () => void): LivePeer {
   const peer: RoomPeer = {
     send(message) {
       if (ws.readyState === ws.OPEN) ws.send(message, (error) => error && ws.terminate())
@@ -73,6 +85,7 @@ export function connectPeer(ws: WebSocket, room: DesignRoom, access: CollabAcces
   room.addPeer(peer)
   let alive = true
   const heartbeat = setInterval(() => {
+    if (Date.now() >= access.expiresAt.getTime()) return ws.close(COLLAB_CLOSE.sessionEnded, CLOSE_MESSAGES.sessionEnded)
     if (!alive) return ws.terminate()
     alive = false
     ws.ping()
@@ -92,4 +105,14 @@ export function connectPeer(ws: WebSocket, room: DesignRoom, access: CollabAcces
     room.removePeer(peer)
     onClose()
   })
+  return {
+    access,
+    close: (code, reason) => ws.close(code, reason),
+    noticeAccess() {
+      const encoder = encoding.createEncoder()
+      encoding.writeVarUint(encoder, MESSAGE_AUTH)
+      authProtocol.writePermissionDenied(encoder, accessNoticeReason(access.role, access.readOnly))
+      peer.send(encoding.toUint8Array(encoder))
+    },
+  }
 }

@@ -21,9 +21,24 @@ export const MESSAGE_QUERY_AWARENESS = 3
 export const COLLAB_CLOSE = {
   sessionEnded: 4401,
   accessRemoved: 4403,
+  /** The project does not exist or is not visible to this user. */
+  notFound: 4404,
   storageFailed: 4500,
   serverStopping: 4503,
 } as const
+
+/**
+ * When an open connection's role changes, the server sends a y-protocols auth message ("permission
+ * denied") whose reason is `<role>:read-only` or `<role>:edit`, and applies the new rights at once.
+ */
+export function accessNoticeReason(role: string, readOnly: boolean): string {
+  return `${role}:${readOnly ? 'read-only' : 'edit'}`
+}
+
+export function parseAccessNotice(reason: string): { role: string; readOnly: boolean } | undefined {
+  const match = /^([a-z]+):(read-only|edit)$/.exec(reason)
+  return match ? { role: match[1]!, readOnly: match[2] === 'read-only' } : undefined
+}
 
 /** What each client publishes in its awareness state (presence on the canvas). */
 export interface CollabAwarenessState {

@@ -1,11 +1,14 @@
-// Who may open /collab/<projectId>: the upgrade is answered with an HTTP status before any WebSocket
-// exists. Editors (owner, designer) and watchers (reviewer, client with a share) get 101; the role's
-// read-only flag is tested in collab.test.ts. Everything else is refused like the API would refuse it.
+// Who may open /collab/<projectId>. Editors (owner, designer) and watchers (reviewer, client with a
+// share) join the room; the role's read-only flag is tested in collab.test.ts. A missing or ended
+// session and a project the user cannot see are refused in-band — the handshake completes and the
+// socket closes at once with 4401 / 4404 (a browser cannot read an HTTP status of a refused handshake).
+// A foreign Origin or a path that is not /collab/<uuid> is refused with an HTTP status.
 import { randomBytes, randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { signSessionToken, SESSION_COOKIE } from '../../server/security/session-token'
 import { startSession } from '../../server/modules/auth/sessions'
-import { collabUrl, upgradeStatus } from '../helpers/collab'
+import { COLLAB_CLOSE } from '../../shared/collab/protocol'
+import { collabUrl, upgradeStatus, type UpgradeOutcome } from '../helpers/collab'
 import { createOrganization, createProject, type TestOrganization, type TestUser } from '../helpers/factories'
 import { startTestServer, type TestServer } from '../helpers/server'
 
@@ -28,28 +31,28 @@ async function cookieOf(user: TestUser, organizationId: string): Promise<string>
 }
 const open = (cookie?: string, id = projectId, extra: Record<string, string> = {}) =>
   upgradeStatus(collabUrl(server.baseUrl, id), cookie ? { Cookie: cookie, ...extra } : extra)
+/** 'joined', the in-band close code, or the HTTP status of a refused handshake. */
+const outcome = (o: UpgradeOutcome) => (o.status !== 101 ? o.status : o.closeCode === undefined ? 'joined' : o.closeCode)
 
 describe('WebSocket upgrade on /collab/:projectId', () => {
   it.each([
-    ['owner', 101],
-    ['designer', 101],
-    ['reviewer', 101],
-    ['client', 101],
-    ['otherClient', 404],
-  ] as const)('%s of the organisation → %i', async (who, status) => {
-    expect((await open(await cookieOf(orgA[who], orgA.id))).status).toBe(status)
+    ['owner', 'joined'],
+    ['designer', 'joined'],
+    ['reviewer', 'joined'],
+    ['client', 'joined'],
+    ['otherClient', COLLAB_CLOSE.notFound],
+  ] as const)('%s of the organisation → %s', async (who, expected) => {
+    expect(outcome(await open(await cookieOf(orgA[who], orgA.id)))).toBe(expected)
   })
 
-  it("another organisation's owner → 404 (never 403)", async () => {
+  it("another organisation's owner → closed with 4404 (never 4403)", async () => {
     const res = await open(await cookieOf(orgB.owner, orgB.id))
-    expect(res.status).toBe(404)
-    expect(JSON.parse(res.body).error.code).toBe('not_found')
+    expect(res).toMatchObject({ status: 101, closeCode: 4404, closeReason: 'Project not found' })
   })
 
-  it('no cookie → 401', async () => {
+  it('no cookie → closed with 4401 and a reason', async () => {
     const res = await open()
-    expect(res.status).toBe(401)
-    expect(JSON.parse(res.body)).toEqual({ error: { code: 'unauthenticated', message: 'Sign in to continue' } })
+    expect(res).toMatchObject({ status: 101, closeCode: 4401, closeReason: 'Sign in to continue' })
   })
 
   it('an expired token → 401', async () => {
@@ -58,7 +61,7 @@ describe('WebSocket upgrade on /collab/:projectId', () => {
       { userId: orgA.owner.id, organizationId: orgA.id, sessionId, expiresAt: new Date(Date.now() - 60_000) },
       server.config.jwtSecret,
     )
-    expect((await open(`${SESSION_COOKIE}=${expired}`)).status).toBe(401)
+    expect(await open(`${SESSION_COOKIE}=${expired}`)).toMatchObject({ closeCode: 4401, closeReason: 'Your session has ended. Sign in again.' })
   })
 
   it('a token signed with another secret (forged) → 401', async () => {
@@ -67,22 +70,22 @@ describe('WebSocket upgrade on /collab/:projectId', () => {
       { userId: orgA.owner.id, organizationId: orgA.id, sessionId, expiresAt: new Date(Date.now() + 3_600_000) },
       new TextEncoder().encode(randomBytes(32).toString('hex')),
     )
-    expect((await open(`${SESSION_COOKIE}=${forged}`)).status).toBe(401)
-    expect((await open(`${SESSION_COOKIE}=not-a-token`)).status).toBe(401)
+    expect(outcome(await open(`${SESSION_COOKIE}=${forged}`))).toBe(4401)
+    expect(outcome(await open(`${SESSION_COOKIE}=not-a-token`))).toBe(4401)
   })
 
   it('a session that was signed out → 401', async () => {
     const { token } = await startSession(server, { userId: orgA.designer.id, organizationId: orgA.id })
     const cookie = `${SESSION_COOKIE}=${token}`
-    expect((await open(cookie)).status).toBe(101)
+    expect(outcome(await open(cookie))).toBe('joined')
     const logout = await fetch(`${server.baseUrl}/api/auth/logout`, { method: 'POST', headers: { Cookie: cookie, Origin: server.baseUrl } })
     expect(logout.status).toBe(204)
-    expect((await open(cookie)).status).toBe(401)
+    expect(outcome(await open(cookie))).toBe(4401)
   })
 
-  it('an unknown project, a malformed id or another path → 404', async () => {
+  it('an unknown project → 4404; a malformed id or another path → HTTP 404', async () => {
     const cookie = await cookieOf(orgA.owner, orgA.id)
-    expect((await open(cookie, randomUUID())).status).toBe(404)
+    expect(outcome(await open(cookie, randomUUID()))).toBe(4404)
     expect((await open(cookie, 'not-a-uuid')).status).toBe(404)
     expect((await upgradeStatus(server.baseUrl.replace('http', 'ws') + '/elsewhere', { Cookie: cookie })).status).toBe(404)
   })
@@ -90,6 +93,6 @@ describe('WebSocket upgrade on /collab/:projectId', () => {
   it('a handshake from a foreign page (Origin of another site) → 403', async () => {
     const cookie = await cookieOf(orgA.owner, orgA.id)
     expect((await open(cookie, projectId, { Origin: 'https://attacker.example' })).status).toBe(403)
-    expect((await open(cookie, projectId, { Origin: server.baseUrl })).status).toBe(101)
+    expect(outcome(await open(cookie, projectId, { Origin: server.baseUrl }))).toBe('joined')
   })
 })

@@ -4,11 +4,12 @@
 import * as decoding from 'lib0/decoding'
 import * as encoding from 'lib0/encoding'
 import WebSocket from 'ws'
+import * as authProtocol from 'y-protocols/auth'
 import * as awarenessProtocol from 'y-protocols/awareness'
 import * as syncProtocol from 'y-protocols/sync'
 import { WebsocketProvider } from 'y-websocket'
 import * as Y from 'yjs'
-import { COLLAB_PATH_PREFIX, MESSAGE_AWARENESS, MESSAGE_SYNC } from '../../shared/collab/protocol'
+import { COLLAB_PATH_PREFIX, MESSAGE_AUTH, MESSAGE_AWARENESS, MESSAGE_SYNC } from '../../shared/collab/protocol'
 
 export function collabUrl(baseUrl: string, projectId = ''): string {
   return baseUrl.replace(/^http/, 'ws') + COLLAB_PATH_PREFIX + projectId
@@ -61,15 +62,32 @@ export async function connectProvider(baseUrl: string, projectId: string, cookie
   }
 }
 
-/** The HTTP status of the upgrade answer (101 when accepted; the socket is closed again). */
-export function upgradeStatus(url: string, headers: Record<string, string> = {}): Promise<{ status: number; body: string }> {
+export interface UpgradeOutcome {
+  /** 101 when the handshake completed, else the HTTP status of the refusal. */
+  status: number
+  body: string
+  /** Set when the server accepted the handshake and closed at once (an in-band refusal). */
+  closeCode?: number
+  closeReason?: string
+}
+
+/**
+ * How the server answers a connection: an HTTP refusal, an in-band close (handshake, then a close
+ * frame before any message), or an accepted room (its first message, the server's sync step 1).
+ */
+export function upgradeStatus(url: string, headers: Record<string, string> = {}): Promise<UpgradeOutcome> {
   return new Promise((resolve, reject) => {
     const ws = new WebSocket(url, { headers })
-    ws.on('open', () => {
+    ws.once('message', () => {
       ws.close()
       resolve({ status: 101, body: '' })
     })
+    let refusedOverHttp = false
+    ws.once('close', (code, reason) => {
+      if (!refusedOverHttp) resolve({ status: 101, body: '', closeCode: code, closeReason: reason.toString() })
+    })
     ws.on('unexpected-response', (_req, res) => {
+      refusedOverHttp = true
       let body = ''
       res.on('data', (chunk: Buffer) => (body += chunk.toString()))
       res.on('end', () => resolve({ status: res.statusCode ?? 0, body }))
@@ -89,13 +107,19 @@ export class RawCollabClient {
   readonly doc = new Y.Doc()
   readonly awareness = new awarenessProtocol.Awareness(this.doc)
   readonly received: Uint8Array[] = []
+  /** Reasons of the auth ("permission denied") messages the server sent, oldest first. */
+  readonly authNotices: string[] = []
   private step2Waiters: (() => void)[] = []
   closed = false
+  closeCode: number | undefined
+  closeReason: string | undefined
 
   private constructor(readonly ws: WebSocket) {
     ws.on('message', (data: Buffer) => this.onMessage(new Uint8Array(data)))
-    ws.on('close', () => {
+    ws.on('close', (code, reason) => {
       this.closed = true
+      this.closeCode = code
+      this.closeReason = reason.toString()
     })
   }
 
@@ -114,6 +138,10 @@ export class RawCollabClient {
     const type = decoding.readVarUint(decoder)
     if (type === MESSAGE_AWARENESS) {
       awarenessProtocol.applyAwarenessUpdate(this.awareness, decoding.readVarUint8Array(decoder), 'server')
+      return
+    }
+    if (type === MESSAGE_AUTH) {
+      authProtocol.readAuthMessage(decoder, this.doc, (_doc, reason) => this.authNotices.push(reason))
       return
     }
     if (type !== MESSAGE_SYNC) return
