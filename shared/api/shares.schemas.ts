@@ -14,9 +14,17 @@ export const shareLinkInputSchema = z.object({
     .min(1, 'A link works for at least 1 day')
     .max(SHARE_LINK_MAX_DAYS, `A link works for at most ${SHARE_LINK_MAX_DAYS} days`)
     .default(SHARE_LINK_DEFAULT_DAYS),
-  /** Send the link to this address right away (the token is only known at creation). */
+  /** Send the link to this address right away. */
   email: z.string().trim().toLowerCase().email('Enter a valid e-mail address').max(254).optional(),
 })
+
+/** Send (or send again) an existing link: at most this many e-mails per link per hour. */
+export const SHARE_LINK_MAILS_PER_HOUR = 5
+
+export const shareLinkEmailInputSchema = z.object({
+  email: z.string({ error: 'Enter the e-mail address to send the link to' }).trim().toLowerCase().email('Enter a valid e-mail address').max(254, 'Keep the address under 254 characters'),
+})
+export type ShareLinkEmailInput = z.input<typeof shareLinkEmailInputSchema>
 export type ShareLinkInput = z.input<typeof shareLinkInputSchema>
 
 export const approvalInputSchema = z.object({
@@ -36,6 +44,13 @@ export interface ShareLink {
   revokedAt: string | null
   createdAt: string
   createdBy: string | null
+  /** The server kept the token (encrypted) and can e-mail this link; false for links made before that. */
+  canEmail: boolean
+}
+
+/** Answer to sending an existing link by e-mail. */
+export interface EmailedShareLink extends ShareLink {
+  emailedTo: string
 }
 
 /** Returned once, at creation: the only time the token exists outside the recipient's hands. */

@@ -7,7 +7,8 @@ import { randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Role } from '../../shared/api/roles'
 import { createDemoDesign } from '../../shared/design/demo'
-import { designRevisions, invitations } from '../../server/db/schema'
+import { designRevisions, invitations, shareLinks } from '../../server/db/schema'
+import { shareTokenCipher } from '../../server/modules/shares/shareTokenCipher'
 import { newOneTimeToken } from '../../server/security/one-time-tokens'
 import { insertDevice } from '../../server/modules/devices/devices.repository'
 import { createMember, createOrganization, createProject, TEST_PASSWORD, uniqueEmail, type TestOrganization } from '../helpers/factories'
@@ -74,6 +75,17 @@ async function freshRevision(projectId: string): Promise<string> {
   return row.id
 }
 
+/** A live share link of the project whose token the server kept (encrypted), inserted directly. */
+async function freshShareLink(projectId: string): Promise<string> {
+  const { token, tokenHash } = newOneTimeToken()
+  const [row] = await server.db
+    .insert(shareLinks)
+    .values({ projectId, tokenHash, tokenCiphertext: shareTokenCipher(server.config.jwtSecret).encrypt(token, tokenHash),
+      createdBy: orgA.owner.id, expiresAt: new Date(Date.now() + 86_400_000) })
+    .returning({ id: shareLinks.id })
+  return row.id
+}
+
 const projectRoute = (
   method: HttpMethod,
   path: string,
@@ -130,6 +142,10 @@ const ROUTES: RouteCase[] = [
   }),
   projectRoute('delete', '/api/projects/:id/shares/:userId', ['owner', 'designer'], 204, async (id) => ({
     url: `/api/projects/${id}/shares/${orgA.client.id}`,
+  })),
+  projectRoute('post', '/api/projects/:id/share-links/:linkId/email', ['owner', 'designer'], 200, async (id) => ({
+    url: `/api/projects/${id}/share-links/${await freshShareLink(id)}/email`,
+    body: { email: uniqueEmail('matrix-share-mail') },
   })),
   projectRoute('get', '/api/projects/:id/design', ALL_ROLES, 200, async (id) => ({ url: `/api/projects/${id}/design` })),
   projectRoute('put', '/api/projects/:id/design', ['owner', 'designer'], 200, async (id) => ({

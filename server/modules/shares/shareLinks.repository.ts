@@ -1,4 +1,4 @@
-import { and, desc, eq } from 'drizzle-orm'
+import { and, desc, eq, sql } from 'drizzle-orm'
 import type { DbOrTx } from '../../db/client'
 import { approvals, designRevisions, projects, shareLinks, users } from '../../db/schema'
 
@@ -11,6 +11,7 @@ const linkColumns = {
   createdAt: shareLinks.createdAt,
   createdById: shareLinks.createdBy,
   createdByName: users.name,
+  canEmail: sql<boolean>`(${shareLinks.tokenCiphertext} is not null)`,
 }
 export type ShareLinkRow = Awaited<ReturnType<typeof listShareLinks>>[number]
 
@@ -33,6 +34,15 @@ export async function findShareLink(db: DbOrTx, projectId: string, linkId: strin
     .select(linkColumns)
     .from(shareLinks)
     .leftJoin(users, eq(users.id, shareLinks.createdBy))
+    .where(and(eq(shareLinks.projectId, projectId), eq(shareLinks.id, linkId)))
+  return row
+}
+
+/** The stored token (hash and ciphertext) of one link, for e-mailing it again. */
+export async function findShareLinkToken(db: DbOrTx, projectId: string, linkId: string) {
+  const [row] = await db
+    .select({ tokenHash: shareLinks.tokenHash, tokenCiphertext: shareLinks.tokenCiphertext })
+    .from(shareLinks)
     .where(and(eq(shareLinks.projectId, projectId), eq(shareLinks.id, linkId)))
   return row
 }

@@ -1,10 +1,12 @@
 import { Router } from 'express'
 import { z } from 'zod'
-import { shareLinkInputSchema } from '../../../shared/api/shares.schemas'
+import { shareLinkEmailInputSchema, shareLinkInputSchema } from '../../../shared/api/shares.schemas'
 import { actorOf, idParam } from '../../http/actor'
 import { authOf, requirePermission } from '../../http/auth'
 import type { RouteDeps } from '../../http/route-deps'
 import { validate } from '../../http/validate'
+import { shareLinkEmailRateLimit } from './shareLinkEmail.rateLimit'
+import { emailShareLink } from './shareLinkEmail.service'
 import { createShareLink, projectApprovals, projectShareLinks, revokeLink } from './shares.service'
 
 /** Mounted at /api/projects/:id: share links (owner, designer) and approvals (readers of the project). */
@@ -30,6 +32,13 @@ export function shareLinksRoutes(deps: RouteDeps): Router {
     await revokeLink(db, actorOf(req), p.id, p.linkId)
     res.status(204).end()
   })
+
+  const emailInput = validate({ params: params.extend({ linkId: idParam }), body: shareLinkEmailInputSchema })
+  router.post('/share-links/:linkId/email', deps.requireSession, requirePermission('project.share', 'send share links'), emailInput,
+    shareLinkEmailRateLimit(), async (req, res) => {
+      const { params: p, body } = emailInput.data(req)
+      res.json(await emailShareLink(deps, { ...actorOf(req), name: authOf(req).user.name }, p.id, p.linkId, body))
+    })
 
   router.get('/approvals', deps.requireSession, requirePermission('project.read'), listInput, async (req, res) => {
     res.json(await projectApprovals(db, actorOf(req), listInput.data(req).params.id))

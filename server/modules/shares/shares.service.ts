@@ -11,6 +11,7 @@ import { hashOneTimeToken, newOneTimeToken } from '../../security/one-time-token
 import { exportContextForProject, type ExportContext } from '../exports/exportContext'
 import { getProject } from '../projects/projects.service'
 import { approvalMail, shareLinkMail } from './shares.mail'
+import { cipherFor } from './shareTokenCipher'
 import {
   findLinkByTokenHash,
   findShareLink,
@@ -33,12 +34,12 @@ interface Deps {
 const DAY_MS = 24 * 60 * 60 * 1000
 export const SHARE_MAIL_NOT_SENT = 'The share link was made, but the e-mail could not be sent. Copy the link and send it yourself.'
 
-function statusOf(row: { expiresAt: Date; revokedAt: Date | null }, now = new Date()): ShareLink['status'] {
+export function statusOf(row: { expiresAt: Date; revokedAt: Date | null }, now = new Date()): ShareLink['status'] {
   if (row.revokedAt) return 'revoked'
   return row.expiresAt.getTime() <= now.getTime() ? 'expired' : 'active'
 }
 
-function toShareLink(row: ShareLinkRow): ShareLink {
+export function toShareLink(row: ShareLinkRow): ShareLink {
   return {
     id: row.id,
     label: row.label,
@@ -47,6 +48,7 @@ function toShareLink(row: ShareLinkRow): ShareLink {
     revokedAt: row.revokedAt?.toISOString() ?? null,
     createdAt: row.createdAt.toISOString(),
     createdBy: row.createdByName ?? null,
+    canEmail: row.canEmail,
   }
 }
 
@@ -74,7 +76,8 @@ export async function createShareLink(
   const project = await getProject(deps.db, actor, projectId)
   const { token, tokenHash } = newOneTimeToken()
   const expiresAt = new Date(Date.now() + input.expiresInDays * DAY_MS)
-  const id = await insertShareLink(deps.db, { projectId, label: input.label, tokenHash, createdBy: actor.userId, expiresAt })
+  const tokenCiphertext = cipherFor(deps.config).encrypt(token, tokenHash)
+  const id = await insertShareLink(deps.db, { projectId, label: input.label, tokenHash, tokenCiphertext, createdBy: actor.userId, expiresAt })
   const url = shareUrl(deps.config, token)
   let emailedTo: string | null = null
   if (input.email) {
