@@ -59,6 +59,12 @@ export function formatReport(design: Design, result: AnalysisResult, source: str
   const scenarioNames = new Map(design.scenarios.map((s) => [s.id, s.name]))
   const lines: string[] = [`${design.name} — ${source}`, `${design.settings.nominalVoltageV} V ${design.settings.profile} system, ` +
     `${plural(design.parts.length, 'part')}, ${plural(design.conductors.length, 'conductor')}`, '']
+  // Devices whose time-current band comes from their own datasheet points, not their family's.
+  for (const part of design.parts) {
+    const device = (part.type === 'fuse' || part.type === 'breaker') ? part.params.customDevice : undefined
+    if (device) lines.push(`Library device: ${part.label || part.id} uses “${device.name}” (${device.ratingA} A, points from ${device.source})`)
+  }
+  if (lines.length > 3) lines.push('')
 
   lines.push('Scenarios')
   lines.push(renderTable(

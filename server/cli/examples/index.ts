@@ -2,6 +2,7 @@ import { createDemoDesign } from '../../../shared/design/demo'
 import { badDesign, floatingPart } from './faulty'
 import { sailboat24V } from './sailboat'
 import { smallVan12V } from './smallVan'
+import { libraryDevicePump } from './libraryDevice'
 import { autoResetBreaker, motorStartNuisance, notSelective, slowFaultClearing, thermalBreakerOnly } from './timeCurrent'
 
 /** Every file in examples/ and the code that produces it (server/cli/write-examples.ts writes them). */
@@ -17,6 +18,8 @@ export const EXAMPLE_FILES: Record<string, () => unknown> = {
   'thermal-breaker-only.json': thermalBreakerOnly,
   'not-selective.json': notSelective,
   'auto-reset-breaker.json': autoResetBreaker,
+  // A fuse set to a device from an organisation's library (params.customDevice), analysed from the file alone.
+  'library-device-pump.json': libraryDevicePump,
 }
 
 /** The rule each time-current example exists to show (tests/unit/cli/examples.test.ts checks it fires). */

@@ -13,7 +13,7 @@ type Profile = DesignSettings['profile']
 type DeviceParams = Partial<ParamsOf<'fuse'>>
 type LoadParams = Partial<ParamsOf<'load'>>
 
-interface Branch {
+export interface Branch {
   id: string
   name: string
   profile: Profile
@@ -26,7 +26,7 @@ interface Branch {
   motorStart?: boolean
 }
 
-function branchDesign(b: Branch): Design {
+export function branchDesign(b: Branch): Design {
   const settings: DesignSettings = { nominalVoltageV: 12, unitSystem: 'metric', profile: b.profile, defaultAmbientC: 30 }
   const part = (type: Part['type'], id: string, label: string, x: number, y: number, params: object = {}) =>
     makePart(settings, type, id, label, { x, y }, params as never)
@@ -60,6 +60,12 @@ function branchDesign(b: Branch): Design {
   }
 }
 
+/** A transfer pump: 8 A running, 6 × that for 0.5 s at each start. */
+export const PUMP_LOAD: Branch['load'] = {
+  label: 'Transfer pump',
+  params: { model: 'current', currentA: 8, duty: 'intermittent', start: { inrushMultiple: 6, durationS: 0.5 } },
+}
+
 /**
  * A 15 A regular blade fuse ahead of a pump with an 8 A run and a 6 × start for 0.5 s: 48 A is
  * 3.2 × the rating, where the blade band may open after ≈ 90 ms (ISO 8820-3 points, recalled).
@@ -68,7 +74,7 @@ export function motorStartNuisance(): Design {
   return branchDesign({
     id: 'motor-start-nuisance', name: 'Pump on a fast blade fuse', profile: 'vehicle', bankOhm: 0.015, mainA: 100,
     device: { type: 'fuse', label: 'Pump fuse, blade 15 A', params: { family: 'blade-regular', ratingA: 15, interruptingRatingA: 1000 } },
-    load: { label: 'Transfer pump', params: { model: 'current', currentA: 8, duty: 'intermittent', start: { inrushMultiple: 6, durationS: 0.5 } } },
+    load: PUMP_LOAD,
     feed: { sizeId: 'awg-12', lengthM: 2 }, motorStart: true,
   })
 }

@@ -64,4 +64,18 @@ describe('examples/ files', () => {
     // Warnings only (a start that may open, a selectivity loss): exit 0.
     for (const name of ['motor-start-nuisance.json', 'not-selective.json']) expect(await code(name), name).toBe(0)
   })
+  it('library-device-pump.json: the library fuse (2.5 s at 48 A, its own point) rides through the start the blade band opens on', async () => {
+    const design = load('library-device-pump.json')
+    const device = design.parts.find((p) => p.id === 'branch-device')
+    expect(device?.type === 'fuse' && device.params.customDevice?.name).toBe('Workshop time-delay fuse 15 A')
+    expect(analyzeDesign(design).findings.filter((f) => f.severity !== 'info').map((f) => `${f.ruleId}: ${f.message}`)).toEqual([])
+    // The same file without the embedded device falls back to the regular blade family: the ≈ 88 ms finding above.
+    if (device?.type === 'fuse') delete device.params.customDevice
+    const f = analyzeDesign(design).findings.find((x) => x.ruleId === 'motor-start-nuisance-open')!
+    expect(f.limit!.value).toBeCloseTo(0.088, 3)
+    // Far-end short of the 12 AWG run: cleared by the library band at 0.03 · (300 / I)² s, inside the ICEA withstand.
+    const farEndA = analyzeDesign(load('library-device-pump.json')).conductors.find((c) => c.id === 'load-pos')!.faultCurrentFarEndA
+    expect(0.03 * (300 / farEndA) ** 2).toBeLessThan(0.001607 * (6530 / farEndA) ** 2)
+    expect(await runAnalyzeCli(['examples/library-device-pump.json'], { out: () => {}, err: () => {} })).toBe(0)
+  })
 })
