@@ -130,7 +130,7 @@ function partMaxCurrents(design: Design, solves: ScenarioSolve[]): Map<string, {
   }
   const busIds = new Set(design.parts.filter((p) => p.type === 'bus-bar').map((p) => p.id))
   for (const s of solves) {
-    for (const [id, amps] of s.partCurrentA) note(id, Math.abs(amps), s.scenario.id)
+    design.parts.forEach((part, k) => note(part.id, Math.abs(s.partCurrentA[k]), s.scenario.id))
     const inflow = new Map<string, number>()
     design.conductors.forEach((c, i) => {
       const amps = s.conductorCurrentA[i] // from → to
@@ -146,15 +146,15 @@ function partMaxCurrents(design: Design, solves: ScenarioSolve[]): Map<string, {
 function loadRunningCurrents(design: Design, solves: ScenarioSolve[]): Map<string, number> {
   const result = new Map<string, number>()
   const nominalV = design.settings.nominalVoltageV
-  for (const part of design.parts) {
-    if (part.type !== 'load') continue
+  design.parts.forEach((part, k) => {
+    if (part.type !== 'load') return
     let amps = 0
-    for (const s of solves) if (!s.scenario.motorStart) amps = Math.max(amps, Math.abs(s.partCurrentA.get(part.id) ?? 0))
+    for (const s of solves) if (!s.scenario.motorStart) amps = Math.max(amps, Math.abs(s.partCurrentA[k]))
     if (amps === 0) {
       const p = part.params
       amps = p.model === 'current' ? (p.currentA ?? 0) : p.model === 'power' ? (p.powerW ?? 0) / nominalV : nominalV / (p.resistanceOhm ?? Infinity)
     }
     result.set(part.id, finite(amps))
-  }
+  })
   return result
 }

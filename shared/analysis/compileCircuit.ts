@@ -5,7 +5,7 @@ import type { SolverCache } from '../solver/solverCache'
 import { protectiveDevices, type ProtectiveDevice } from './_lib/devices'
 import { finite } from './_lib/finite'
 import { buildPassiveCircuit, type PassiveCircuit } from './_lib/passiveCircuit'
-import { buildTerminalNodes, terminalKey, type TerminalNodes } from './_lib/terminalNodes'
+import { buildTerminalNodes, nodeAt, type TerminalNodes } from './_lib/terminalNodes'
 
 /** Who an element stands for: a part (and which of its elements) or a conductor. */
 export interface ElementOwner {
@@ -32,6 +32,10 @@ export interface CompiledCircuit {
   partElement: Map<string, number>
   /** Protective device id → its resistor (closed devices only). */
   deviceElement: Map<string, number>
+  /** The same three by position: per conductor and per part (design order), per device (protectiveDevices order); −1 none. */
+  conductorElementAt: Int32Array
+  partElementAt: Int32Array
+  deviceElementAt: Int32Array
   /** Negative terminal node of every battery, in part order. */
   batteryNegNodes: number[]
   problems: CompileProblem[]
@@ -74,9 +78,10 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
   const elements: CircuitElement[] = base.elements.slice()
   const owners: ElementOwner[] = base.owners.slice()
   const partElement = new Map(base.partElement)
+  const partElementAt = base.partElementAt.slice()
   const problems: CompileProblem[] = base.problems.slice()
-  const { conductorElement, deviceElement, batteryNegNodes, arraysOfController } = base
-  const node = (partId: string, terminal: string) => nodes.nodeOf.get(terminalKey(partId, terminal))
+  const { conductorElement, deviceElement, conductorElementAt, deviceElementAt, batteryNegNodes, arraysOfController } = base
+  const node = (partId: string, terminal: string) => nodeAt(nodes, partId, terminal)
   const add = (el: CircuitElement, owner: ElementOwner) => {
     elements.push(el)
     owners.push(owner)
@@ -92,6 +97,11 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
     return s && s.on && s.level > 0 ? s.level : 0
   }
 
+  const setOwn = (partId: string, e: number) => {
+    partElement.set(partId, e)
+    const k = base.partIndex.get(partId)
+    if (k !== undefined) partElementAt[k] = e
+  }
   for (const part of design.parts) {
     const main = { kind: 'part' as const, id: part.id, role: 'main' }
     switch (part.type) {
@@ -109,7 +119,7 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
             : p.model === 'resistance'
               ? { kind: 'resistor', id: `p:${part.id}`, a: pos!, b: neg!, resistanceOhm: finite((p.resistanceOhm ?? 1e6) / level / inrush, 1e6) }
               : { kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite((p.powerW ?? 0) * level * inrush), minVoltageV }
-        partElement.set(part.id, add(el, main))
+        setOwn(part.id, add(el, main))
         break
       }
       case 'inverter': {
@@ -119,7 +129,7 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
         const neg = node(part.id, 'neg')
         if (!canSupply(pos, neg)) { noSupply(part); break }
         const acW = scenario.motorStart ? part.params.surgeW : part.params.continuousW * level
-        partElement.set(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite(acW / part.params.efficiency), minVoltageV }, main))
+        setOwn(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite(acW / part.params.efficiency), minVoltageV }, main))
         break
       }
       case 'mains-charger': {
@@ -127,7 +137,7 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
         const pos = node(part.id, 'bat-pos')
         const neg = node(part.id, 'bat-neg')
         if (!canSupply(pos, neg)) { noSupply(part); break }
-        partElement.set(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: neg!, to: pos!, currentA: part.params.outputCurrentA }, main))
+        setOwn(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: neg!, to: pos!, currentA: part.params.outputCurrentA }, main))
         break
       }
       case 'dc-dc-charger': {
@@ -137,7 +147,7 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
         if (!canSupply(...ns)) { noSupply(part); break }
         const outA = part.params.outputCurrentA * level
         add({ kind: 'cpower', id: `p:${part.id}#in`, pos: ns[0]!, neg: ns[1]!, powerW: finite((outA * nominalV) / part.params.efficiency), minVoltageV: part.params.inputMinV }, { kind: 'part', id: part.id, role: 'input' })
-        partElement.set(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: ns[3]!, to: ns[2]!, currentA: finite(outA) }, main))
+        setOwn(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: ns[3]!, to: ns[2]!, currentA: finite(outA) }, main))
         break
       }
       case 'charge-controller': {
@@ -172,15 +182,15 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
       const pos = node(a.id, 'pos')
       const neg = node(a.id, 'neg')
       if (pos === undefined || neg === undefined) continue
-      partElement.set(a.id, add({ kind: 'isource', id: `p:${a.id}`, from: neg, to: pos, currentA: finite(a.params.moduleImpA * a.params.strings * share) }, { kind: 'part', id: a.id, role: 'main' }))
+      setOwn(a.id, add({ kind: 'isource', id: `p:${a.id}`, from: neg, to: pos, currentA: finite(a.params.moduleImpA * a.params.strings * share) }, { kind: 'part', id: a.id, role: 'main' }))
     }
     add({ kind: 'resistor', id: `p:${part.id}#pv`, a: ns[0], b: ns[1], resistanceOhm: finite(operatingV / (totalImpA * share), 1e6) }, { kind: 'part', id: part.id, role: 'pv-input' })
-    partElement.set(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: ns[2], neg: ns[3], powerW: -finite(outW), minVoltageV }, { kind: 'part', id: part.id, role: 'main' }))
+    setOwn(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: ns[2], neg: ns[3], powerW: -finite(outW), minVoltageV }, { kind: 'part', id: part.id, role: 'main' }))
   }
 
   return {
     circuit: { nodeCount: nodes.nodeCount, nodeNames: nodes.nodeNames, elements },
-    nodes, owners, conductorElement, partElement, deviceElement, batteryNegNodes, problems,
+    nodes, owners, conductorElement, partElement, deviceElement, conductorElementAt, partElementAt, deviceElementAt, batteryNegNodes, problems,
   }
 }
 

@@ -1,7 +1,7 @@
 import type { Design } from '../design/schema'
 import type { ProtectiveDevice } from './_lib/devices'
 import { MinHeap } from './_lib/minHeap'
-import { terminalKey, type TerminalNodes } from './_lib/terminalNodes'
+import { nodeAt, polarityAt, type TerminalNodes } from './_lib/terminalNodes'
 
 export type SupplySide = 'battery' | 'pv' | 'none'
 
@@ -64,9 +64,8 @@ interface Graph {
  */
 export function protectionTopology(design: Design, nodes: TerminalNodes, devices: ProtectiveDevice[]): ProtectionTopology {
   const n = nodes.nodeCount
-  const nodeOf = (partId: string, terminal: string) => nodes.nodeOf.get(terminalKey(partId, terminal))
-  const polarityOf = (partId: string, terminal: string) =>
-    nodes.terminalsOf.get(partId)?.find((t) => t.id === terminal)?.polarity
+  const nodeOf = (partId: string, terminal: string) => nodeAt(nodes, partId, terminal)
+  const polarityOf = (partId: string, terminal: string) => polarityAt(nodes, partId, terminal)
 
   // Graph of the positive network: conductors (length) and series parts (0 m). Open devices count:
   // protection is a property of the wiring, not of a switch position.
@@ -77,11 +76,11 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
   const edgeDevice: number[] = []
   const conductorEnds: { a: number; b: number; positive: boolean }[] = []
   design.conductors.forEach((c, i) => {
-    const a = nodeOf(c.from.partId, c.from.terminal)
-    const b = nodeOf(c.to.partId, c.to.terminal)
+    const a = nodes.conductorFrom[i]
+    const b = nodes.conductorTo[i]
     const positive = polarityOf(c.from.partId, c.from.terminal) === 'positive' || polarityOf(c.to.partId, c.to.terminal) === 'positive'
-    conductorEnds.push({ a: a ?? -1, b: b ?? -1, positive })
-    if (a === undefined || b === undefined || !positive) return
+    conductorEnds.push({ a, b, positive })
+    if (a < 0 || b < 0 || !positive) return
     edgeA.push(a); edgeB.push(b); edgeLen.push(c.lengthM); edgeConductor.push(i); edgeDevice.push(-1)
   })
   devices.forEach((d, i) => {

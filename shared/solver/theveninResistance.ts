@@ -70,23 +70,29 @@ function theveninSolver(system: NodalSystem): (ua: number, ub: number) => number
   const { parent, lp } = system.factor.symbolic
   const w = new Float64Array(system.n)
   const onPath = new Uint8Array(system.n)
-  const path: number[] = []
+  // Elimination-tree paths from ua (to the root) and from ub (up to where it meets the first).
+  const pathA = new Int32Array(system.n)
+  const pathB = new Int32Array(system.n)
   return (ua, ub) => {
-    path.length = 0
+    let lengthA = 0
+    let lengthB = 0
     for (let j = ua; j >= 0 && !onPath[j]; j = parent[j]) {
       onPath[j] = 1
-      path.push(j)
+      pathA[lengthA++] = j
     }
     for (let j = ub; j >= 0 && !onPath[j]; j = parent[j]) {
       onPath[j] = 1
-      path.push(j)
+      pathB[lengthB++] = j
     }
-    // Both walks climb in increasing column order; the forward solve needs them merged in that order.
-    path.sort((x, y) => x - y)
     if (ua >= 0) w[ua] += 1
     if (ub >= 0) w[ub] -= 1
+    // Both walks climb in increasing column order (a parent's column is above its child's): the
+    // forward solve visits their union in that order, by merging the two sorted lists.
     let resistanceOhm = 0
-    for (const j of path) {
+    let ia = 0
+    let ib = 0
+    while (ia < lengthA || ib < lengthB) {
+      const j = ib >= lengthB || (ia < lengthA && pathA[ia] < pathB[ib]) ? pathA[ia++] : pathB[ib++]
       const wj = w[j]
       if (wj !== 0) {
         for (let p = lp[j]; p < lp[j + 1]; p++) w[li[p]] -= lx[p] * wj

@@ -60,7 +60,7 @@ export function conductorStats(
       const amps = Math.abs(s.conductorCurrentA[i])
       if (amps > maxCurrentA) { maxCurrentA = amps; maxScenarioId = s.scenario.id }
       if (!s.scenario.motorStart && amps > steadyCurrentA) { steadyCurrentA = amps; steadyScenarioId = s.scenario.id }
-      dropPercentMax = Math.max(dropPercentMax, s.result.conductors[i]?.dropPercent ?? 0)
+      dropPercentMax = Math.max(dropPercentMax, s.conductorDropPercent[i])
     }
     const tapped = topology.conductors.get(c.id)!
     const pv = pvRole(c, tapped.side === 'pv' ? tapped.sourcePartId : null, arrayById, groupOfArray, controllerGroup)

@@ -32,10 +32,10 @@ export function deviceStats(
   conductors: ConductorStats[],
 ): DeviceStats[] {
   // Currents of intermittent loads (and everything during a motor start) do not count as continuous.
-  const chains = new Map<string, string[]>()
-  for (const part of design.parts) {
-    if (part.type === 'load' && part.params.duty === 'intermittent') chains.set(part.id, deviceChainOfPart(part.id, design, topology, conductorsAt))
-  }
+  const chains = new Map<number, string[]>() // part index → device chain
+  design.parts.forEach((part, k) => {
+    if (part.type === 'load' && part.params.duty === 'intermittent') chains.set(k, deviceChainOfPart(part.id, design, topology, conductorsAt))
+  })
   const protects = new Map<string, string[]>()
   for (const { protection: t } of conductors) {
     if (!t.protectingDeviceId) continue
@@ -54,20 +54,20 @@ export function deviceStats(
   // Per scenario, the intermittent current through each device: one pass over each load's chain.
   const intermittentByScenario = solves.map((s) => {
     const byDevice = new Map<string, number>()
-    for (const [loadId, chain] of chains) {
-      const amps = Math.abs(s.partCurrentA.get(loadId) ?? 0)
+    for (const [load, chain] of chains) {
+      const amps = Math.abs(s.partCurrentA[load])
       if (amps > 0) for (const id of chain) byDevice.set(id, (byDevice.get(id) ?? 0) + amps)
     }
     return byDevice
   })
 
-  return devices.map((device) => {
+  return devices.map((device, index) => {
     let maxCurrentA = 0
     let maxScenarioId: string | null = null
     let continuousA = 0
     let continuousScenarioId: string | null = null
     solves.forEach((s, k) => {
-      const amps = s.deviceCurrentA.get(device.id) ?? 0
+      const amps = s.deviceCurrentA[index]
       if (amps > maxCurrentA) { maxCurrentA = amps; maxScenarioId = s.scenario.id }
       if (s.scenario.motorStart) return
       const intermittent = intermittentByScenario[k].get(device.id) ?? 0

@@ -3,7 +3,7 @@ import { faultCurrents, type FaultLocation } from '../../solver/theveninResistan
 import { compileCircuit, FAULT_STUDY_SCENARIO, type PreparedDesign } from '../compileCircuit'
 import type { ProtectionTopology } from '../protectionTopology'
 import { finite } from './finite'
-import { terminalKey } from './terminalNodes'
+import { nodeAt } from './terminalNodes'
 
 export interface FaultStudy {
   /** Bolted fault at the device's load terminal to the negative of its bank, A. */
@@ -21,32 +21,42 @@ export interface FaultStudy {
  */
 export function faultStudy(design: Design, prepared: PreparedDesign, topology: ProtectionTopology): FaultStudy {
   const compiled = compileCircuit(design, FAULT_STUDY_SCENARIO, prepared)
-  const { nodeOf, terminalsOf } = prepared.nodes
+  const nodes = prepared.nodes
   const bankNeg = new Map<string, number>()
   for (const el of compiled.circuit.elements) if (el.kind === 'vsource') bankNeg.set(el.id.slice(2), el.neg)
 
+  // Faults in the order of their owners: the devices, then the conductors (results come back in that order).
   const faults: FaultLocation[] = []
+  const faultDevice: string[] = []
   for (const d of prepared.devices) {
     const t = topology.devices.get(d.id)
-    const a = nodeOf.get(terminalKey(d.partId, d.loadTerminal))
+    const a = nodeAt(nodes, d.partId, d.loadTerminal)
     const b = t?.side === 'battery' && t.sourcePartId ? bankNeg.get(t.sourcePartId) : undefined
-    if (a !== undefined && b !== undefined) faults.push({ id: `d:${d.id}`, a, b })
+    if (a !== undefined && b !== undefined) {
+      faults.push({ id: `d:${d.id}`, a, b })
+      faultDevice.push(d.id)
+    }
   }
-  for (const c of design.conductors) {
+  const deviceFaults = faults.length
+  const faultConductor: string[] = []
+  design.conductors.forEach((c, k) => {
     const t = topology.conductors.get(c.id)
-    if (!t || t.side !== 'battery' || !t.sourcePartId) continue
-    const far = [c.from, c.to].find((ref) => nodeOf.get(terminalKey(ref.partId, ref.terminal)) === t.downstreamNode)
-    const negTerminal = far ? terminalsOf.get(far.partId)?.find((term) => term.polarity === 'negative') : undefined
-    const b = (negTerminal && far ? nodeOf.get(terminalKey(far.partId, negTerminal.id)) : undefined) ?? bankNeg.get(t.sourcePartId)
-    if (b !== undefined) faults.push({ id: `c:${c.id}`, a: t.downstreamNode, b })
-  }
+    if (!t || t.side !== 'battery' || !t.sourcePartId) return
+    const far = nodes.conductorFrom[k] === t.downstreamNode ? c.from : nodes.conductorTo[k] === t.downstreamNode ? c.to : undefined
+    const negTerminal = far ? nodes.terminalsOf.get(far.partId)?.find((term) => term.polarity === 'negative') : undefined
+    const b = (negTerminal && far ? nodeAt(nodes, far.partId, negTerminal.id) : undefined) ?? bankNeg.get(t.sourcePartId)
+    if (b !== undefined) {
+      faults.push({ id: `c:${c.id}`, a: t.downstreamNode, b })
+      faultConductor.push(c.id)
+    }
+  })
 
   const deviceFaultA = new Map<string, number>()
   const conductorFarEndA = new Map<string, number>()
-  for (const f of faultCurrents(compiled.circuit, faults, { cache: prepared.solverCache })) {
+  faultCurrents(compiled.circuit, faults, { cache: prepared.solverCache }).forEach((f, k) => {
     const amps = finite(f.currentA)
-    if (f.id.startsWith('d:')) deviceFaultA.set(f.id.slice(2), amps)
-    else conductorFarEndA.set(f.id.slice(2), amps)
-  }
+    if (k < deviceFaults) deviceFaultA.set(faultDevice[k], amps)
+    else conductorFarEndA.set(faultConductor[k - deviceFaults], amps)
+  })
   return { deviceFaultA, conductorFarEndA }
 }

@@ -13,7 +13,8 @@ export function loadDrops(design: Design, solves: ScenarioSolve[], topology: Pro
   const nominalV = design.settings.nominalVoltageV
   const worst = new Map<string, LoadDrop>()
   const batteryIds = new Set(design.parts.filter((p) => p.type === 'battery').map((p) => p.id))
-  for (const part of design.parts) {
+  for (let index = 0; index < design.parts.length; index++) {
+    const part = design.parts[index]
     if (part.type !== 'load' && part.type !== 'inverter') continue
     const attached = conductorsAt.get(part.id) ?? []
     const posConductor = attached.find((c) => (c.from.partId === part.id ? c.from : c.to).terminal === 'pos')
@@ -23,7 +24,7 @@ export function loadDrops(design: Design, solves: ScenarioSolve[], topology: Pro
     const critical = part.type === 'inverter' || (part.type === 'load' && part.params.critical)
     for (const s of solves) {
       // A motor start is a transient: the drop limits are for running conditions.
-      if (s.scenario.motorStart || !s.compiled.partElement.has(part.id) || s.op.status !== 'ok') continue
+      if (s.scenario.motorStart || s.compiled.partElementAt[index] < 0 || s.op.status !== 'ok') continue
       const bankV = s.voltageAcross(bankId, 'pos', 'neg')
       const loadV = s.voltageAcross(part.id, 'pos', 'neg')
       if (bankV === null || loadV === null) continue
@@ -33,7 +34,7 @@ export function loadDrops(design: Design, solves: ScenarioSolve[], topology: Pro
       if (!seen || dropPercent > seen.dropPercent) {
         worst.set(part.id, {
           partId: part.id, scenarioId: s.scenario.id, dropV, dropPercent, critical,
-          currentA: Math.abs(s.partCurrentA.get(part.id) ?? 0), conductorIds: attached.map((c) => c.id),
+          currentA: Math.abs(s.partCurrentA[index]), conductorIds: attached.map((c) => c.id),
         })
       }
     }

@@ -4,7 +4,7 @@ import type { CompileProblem, ElementOwner } from '../compileCircuit'
 import { conductorOhm } from './conductorFigures'
 import type { ProtectiveDevice } from './devices'
 import { batteryThevenin } from './sourceModels'
-import { terminalKey, type TerminalNodes } from './terminalNodes'
+import { nodeAt, type TerminalNodes } from './terminalNodes'
 import { UnionFind } from './unionFind'
 
 /** The part of the circuit no scenario changes: conductors, closed devices, switches, shunts, banks. */
@@ -14,6 +14,12 @@ export interface PassiveCircuit {
   conductorElement: Map<string, number>
   partElement: Map<string, number>
   deviceElement: Map<string, number>
+  /** The same by position: per conductor (design order), per part (design order), per device (list order); −1 none. */
+  conductorElementAt: Int32Array
+  partElementAt: Int32Array
+  deviceElementAt: Int32Array
+  /** Part id → its position in design.parts. */
+  partIndex: Map<string, number>
   batteryNegNodes: number[]
   problems: CompileProblem[]
   /** Per node, its group in the wiring + banks graph; hasBattery is indexed by that group. */
@@ -30,7 +36,10 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
   const deviceElement = new Map<string, number>()
   const problems: CompileProblem[] = []
   const batteryNegNodes: number[] = []
-  const node = (partId: string, terminal: string) => nodes.nodeOf.get(terminalKey(partId, terminal))
+  const conductorElementAt = new Int32Array(design.conductors.length).fill(-1)
+  const partElementAt = new Int32Array(design.parts.length).fill(-1)
+  const deviceElementAt = new Int32Array(devices.length).fill(-1)
+  const node = (partId: string, terminal: string) => nodeAt(nodes, partId, terminal)
   const add = (el: CircuitElement, owner: ElementOwner) => {
     elements.push(el)
     owners.push(owner)
@@ -39,32 +48,41 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
 
   // Series paths (conductors and closed devices): the positive-path groups find PV arrays' controllers.
   const series = new UnionFind(nodes.nodeCount)
-  for (const c of design.conductors) {
-    const a = node(c.from.partId, c.from.terminal)
-    const b = node(c.to.partId, c.to.terminal)
+  design.conductors.forEach((c, k) => {
+    const a = nodes.conductorFrom[k]
+    const b = nodes.conductorTo[k]
     const r = conductorOhm(c, design.settings)
-    if (a === undefined || b === undefined || r === null) {
+    if (a < 0 || b < 0 || r === null) {
       problems.push({ kind: 'bad-conductor', message: `Conductor ${c.label || c.id} has an unknown terminal or an unusable size/length`, partIds: [], conductorIds: [c.id] })
-      continue
+      return
     }
-    conductorElement.set(c.id, add({ kind: 'resistor', id: `c:${c.id}`, a, b, resistanceOhm: r }, { kind: 'conductor', id: c.id, role: 'main' }))
+    const e = add({ kind: 'resistor', id: `c:${c.id}`, a, b, resistanceOhm: r }, { kind: 'conductor', id: c.id, role: 'main' })
+    conductorElement.set(c.id, e)
+    conductorElementAt[k] = e
     series.union(a, b)
+  })
+  const partIndex = new Map<string, number>()
+  design.parts.forEach((part, k) => partIndex.set(part.id, k))
+  const setPartElement = (partId: string, e: number) => {
+    partElement.set(partId, e)
+    partElementAt[partIndex.get(partId)!] = e
   }
-  for (const d of devices) {
+  devices.forEach((d, k) => {
     const a = node(d.partId, d.lineTerminal)
     const b = node(d.partId, d.loadTerminal)
-    if (!d.closed || a === undefined || b === undefined) continue
+    if (!d.closed || a === undefined || b === undefined) return
     const role = d.kind === 'panel-way' ? d.id.slice(d.partId.length + 1) : 'main'
     const i = add({ kind: 'resistor', id: `p:${d.id}`, a, b, resistanceOhm: Math.max(d.resistanceOhm, 1e-6) }, { kind: 'part', id: d.partId, role })
-    if (role === 'main') partElement.set(d.partId, i)
+    if (role === 'main') setPartElement(d.partId, i)
     deviceElement.set(d.id, i)
+    deviceElementAt[k] = i
     series.union(a, b)
-  }
+  })
   const addSeries = (part: Part, ta: string, tb: string, ohm: number) => {
     const a = node(part.id, ta)
     const b = node(part.id, tb)
     if (a === undefined || b === undefined) return
-    partElement.set(part.id, add({ kind: 'resistor', id: `p:${part.id}`, a, b, resistanceOhm: Math.max(ohm, 1e-6) }, { kind: 'part', id: part.id, role: 'main' }))
+    setPartElement(part.id, add({ kind: 'resistor', id: `p:${part.id}`, a, b, resistanceOhm: Math.max(ohm, 1e-6) }, { kind: 'part', id: part.id, role: 'main' }))
     series.union(a, b)
   }
   for (const part of design.parts) {
@@ -81,7 +99,7 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
     const neg = node(part.id, 'neg')
     if (pos === undefined || neg === undefined) continue
     const { emfV, resistanceOhm } = batteryThevenin(part.params)
-    partElement.set(part.id, add({ kind: 'vsource', id: `p:${part.id}`, pos, neg, voltageV: emfV, resistanceOhm }, { kind: 'part', id: part.id, role: 'main' }))
+    setPartElement(part.id, add({ kind: 'vsource', id: `p:${part.id}`, pos, neg, voltageV: emfV, resistanceOhm }, { kind: 'part', id: part.id, role: 'main' }))
     supplied.union(pos, neg)
     batteryNegNodes.push(neg)
   }
@@ -91,7 +109,8 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
   for (const n of batteryNegNodes) hasBattery[suppliedRoot[n]] = 1
 
   return {
-    elements, owners, conductorElement, partElement, deviceElement, batteryNegNodes, problems, suppliedRoot, hasBattery,
+    elements, owners, conductorElement, partElement, deviceElement, conductorElementAt, partElementAt, deviceElementAt, partIndex,
+    batteryNegNodes, problems, suppliedRoot, hasBattery,
     arraysOfController: pvArraysByController(design, nodes, series),
   }
 }
@@ -101,13 +120,13 @@ export function pvArraysByController(design: Design, nodes: TerminalNodes, serie
   const controllerOfGroup = new Map<number, string>()
   for (const part of design.parts) {
     if (part.type !== 'charge-controller') continue
-    const pv = nodes.nodeOf.get(terminalKey(part.id, 'pv-pos'))
+    const pv = nodeAt(nodes, part.id, 'pv-pos')
     if (pv !== undefined && !controllerOfGroup.has(series.find(pv))) controllerOfGroup.set(series.find(pv), part.id)
   }
   const result = new Map<string, PartOf<'pv-array'>[]>()
   for (const part of design.parts) {
     if (part.type !== 'pv-array') continue
-    const pos = nodes.nodeOf.get(terminalKey(part.id, 'pos'))
+    const pos = nodeAt(nodes, part.id, 'pos')
     const controller = pos === undefined ? undefined : controllerOfGroup.get(series.find(pos))
     if (!controller) continue
     const list = result.get(controller) ?? []

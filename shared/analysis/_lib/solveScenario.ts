@@ -2,9 +2,9 @@ import type { Design, Scenario } from '../../design/schema'
 import { solveOperatingPoint } from '../../solver/solveOperatingPoint'
 import type { OperatingPoint } from '../../solver/circuit'
 import { compileCircuit, type CompiledCircuit, type PreparedDesign } from '../compileCircuit'
-import type { Finding, ScenarioResult } from '../types'
+import type { Finding, ScenarioConductorResult, ScenarioPartResult, ScenarioResult } from '../types'
 import { finite } from './finite'
-import type { TerminalNodes } from './terminalNodes'
+import { nodeAt, type TerminalNodes } from './terminalNodes'
 import { compileProblemFindings, solverProblemFindings } from './solverFindings'
 
 export interface ScenarioSolve {
@@ -14,10 +14,12 @@ export interface ScenarioSolve {
   result: ScenarioResult
   /** Per conductor (design order): current, A (from → to) */
   conductorCurrentA: Float64Array
-  /** Per device id: |current|, A */
-  deviceCurrentA: Map<string, number>
-  /** Per part id: the current of its own element (0 when it has none) */
-  partCurrentA: Map<string, number>
+  /** Per conductor (design order): drop as a share of the nominal voltage, % */
+  conductorDropPercent: Float64Array
+  /** Per device (protectiveDevices order): |current|, A */
+  deviceCurrentA: Float64Array
+  /** Per part (design order): the current of its own element (a fuse panel: the sum of its ways; else 0) */
+  partCurrentA: Float64Array
   /** Voltage between the two terminals of a part: V(a) − V(b) */
   voltageAcross: (partId: string, a: string, b: string) => number | null
   findings: Finding[]
@@ -39,8 +41,8 @@ function partPairNodes(design: Design, nodes: TerminalNodes): Int32Array {
   design.parts.forEach((part, i) => {
     const pair = TWO_TERMINALS[part.type]
     if (!pair) return
-    pairs![2 * i] = nodes.nodeOf.get(`${part.id}:${pair[0]}`) ?? -1
-    pairs![2 * i + 1] = nodes.nodeOf.get(`${part.id}:${pair[1]}`) ?? -1
+    pairs![2 * i] = nodeAt(nodes, part.id, pair[0]) ?? -1
+    pairs![2 * i + 1] = nodeAt(nodes, part.id, pair[1]) ?? -1
   })
   PAIR_CACHE.set(nodes, pairs)
   return pairs
@@ -53,6 +55,8 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
   const v = op.nodeVoltageV
   const nodeV = (n: number | undefined) => (n === undefined || n >= v.length ? null : finite(v[n]))
   const nominalV = design.settings.nominalVoltageV
+  const elements = compiled.circuit.elements
+  const elementCurrentA = op.elementCurrentA
 
   // Report terminal voltages against the negative of a bank in the same island.
   const islandOf = new Int32Array(compiled.circuit.nodeCount).fill(-1)
@@ -66,42 +70,59 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
   const referenced = (n: number | undefined) => (n === undefined ? 0 : finite((v[n] ?? 0) - (islandOf[n] >= 0 ? refV[islandOf[n]] : 0)))
 
   const conductorCurrentA = new Float64Array(design.conductors.length)
-  const conductors = design.conductors.map((c, i) => {
-    const e = compiled.conductorElement.get(c.id)
-    if (e === undefined) return { id: c.id, currentA: 0, dropV: 0, dropPercent: 0, fromV: 0, toV: 0 }
-    const el = compiled.circuit.elements[e]
-    const currentA = finite(op.elementCurrentA[e])
+  const conductorDropPercent = new Float64Array(design.conductors.length)
+  const conductorAt = compiled.conductorElementAt
+  const conductors: ScenarioConductorResult[] = new Array(design.conductors.length)
+  for (let i = 0; i < design.conductors.length; i++) {
+    const id = design.conductors[i].id
+    const e = conductorAt[i]
+    if (e < 0) {
+      conductors[i] = { id, currentA: 0, dropV: 0, dropPercent: 0, fromV: 0, toV: 0 }
+      continue
+    }
+    const el = elements[e]
+    const currentA = finite(elementCurrentA[e])
     conductorCurrentA[i] = currentA
     const dropV = el.kind === 'resistor' ? Math.abs(currentA) * el.resistanceOhm : 0
-    return {
-      id: c.id, currentA, dropV: finite(dropV), dropPercent: finite((100 * dropV) / nominalV),
+    const dropPercent = finite((100 * dropV) / nominalV)
+    conductorDropPercent[i] = dropPercent
+    conductors[i] = {
+      id, currentA, dropV: finite(dropV), dropPercent,
       fromV: referenced(el.kind === 'resistor' ? el.a : undefined), toV: referenced(el.kind === 'resistor' ? el.b : undefined),
     }
-  })
+  }
 
-  const deviceCurrentA = new Map<string, number>()
-  for (const [id, e] of compiled.deviceElement) deviceCurrentA.set(id, Math.abs(finite(op.elementCurrentA[e])))
-  const partCurrentA = new Map<string, number>()
+  const deviceAt = compiled.deviceElementAt
+  const deviceCurrentA = new Float64Array(deviceAt.length)
+  // A fuse panel's own current is the sum of its ways' (its ways are the devices after "panelId#").
+  const panelCurrent = new Map<string, number>()
+  prepared.devices.forEach((d, k) => {
+    const e = deviceAt[k]
+    if (e < 0) return
+    const amps = Math.abs(finite(elementCurrentA[e]))
+    deviceCurrentA[k] = amps
+    const hash = d.id.indexOf('#')
+    if (hash > 0) panelCurrent.set(d.id.slice(0, hash), (panelCurrent.get(d.id.slice(0, hash)) ?? 0) + amps)
+  })
   const voltageAcross = (partId: string, a: string, b: string) => {
-    const va = nodeV(compiled.nodes.nodeOf.get(`${partId}:${a}`))
-    const vb = nodeV(compiled.nodes.nodeOf.get(`${partId}:${b}`))
+    const va = nodeV(nodeAt(compiled.nodes, partId, a))
+    const vb = nodeV(nodeAt(compiled.nodes, partId, b))
     return va === null || vb === null ? null : va - vb
   }
-  const panelCurrent = new Map<string, number>()
-  for (const [id, current] of deviceCurrentA) {
-    const hash = id.indexOf('#')
-    if (hash > 0) panelCurrent.set(id.slice(0, hash), (panelCurrent.get(id.slice(0, hash)) ?? 0) + current)
-  }
   const pairs = partPairNodes(design, compiled.nodes)
-  const parts = design.parts.map((part, i) => {
-    const e = compiled.partElement.get(part.id)
-    const currentA = e !== undefined ? finite(op.elementCurrentA[e]) : (panelCurrent.get(part.id) ?? 0)
-    partCurrentA.set(part.id, currentA)
+  const partAt = compiled.partElementAt
+  const partCurrentA = new Float64Array(design.parts.length)
+  const parts: ScenarioPartResult[] = new Array(design.parts.length)
+  for (let i = 0; i < design.parts.length; i++) {
+    const part = design.parts[i]
+    const e = partAt[i]
+    const currentA = e >= 0 ? finite(elementCurrentA[e]) : (panelCurrent.get(part.id) ?? 0)
+    partCurrentA[i] = currentA
     const a = pairs[2 * i]
     const b = pairs[2 * i + 1]
     const voltageV = a >= 0 && b >= 0 && a < v.length && b < v.length ? finite(v[a]) - finite(v[b]) : 0
-    return { id: part.id, currentA, powerW: e !== undefined ? finite(op.elementPowerW[e]) : 0, voltageV }
-  })
+    parts[i] = { id: part.id, currentA, powerW: e >= 0 ? finite(op.elementPowerW[e]) : 0, voltageV }
+  }
 
   // A shorted source: name the conductors joined straight across it as well as the source.
   const problems = op.problems.map((p) => {
@@ -123,7 +144,7 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
   const broken = op.problems.some((p) => p.kind === 'shorted-source' || p.kind === 'source-loop' || p.kind === 'invalid-element')
   const status: ScenarioResult['status'] = op.status !== 'ok' ? 'not-converged' : broken ? 'failed' : 'ok'
   return {
-    scenario, compiled, op, conductorCurrentA, deviceCurrentA, partCurrentA, voltageAcross, findings,
+    scenario, compiled, op, conductorCurrentA, conductorDropPercent, deviceCurrentA, partCurrentA, voltageAcross, findings,
     result: scenarioResult({ id: scenario.id, name: scenario.name, status, conductors, parts }, () => {
       // Built on first read (the editor, JSON and postMessage read it; the rules never do): one key per terminal.
       const terminals: Record<string, number> = {}

@@ -2,7 +2,7 @@ import { partTerminals, type TerminalInfo } from '../../design/catalogue'
 import type { Design, Part } from '../../design/schema'
 import { UnionFind } from './unionFind'
 
-/** "partId:terminal", the key of a terminal everywhere in the analysis. */
+/** "partId:terminal", the key of a terminal in the analysis result (ScenarioResult.terminals). */
 export const terminalKey = (partId: string, terminal: string) => `${partId}:${terminal}`
 
 /**
@@ -25,52 +25,105 @@ function internalJoins(part: Part, terminals: TerminalInfo[]): string[][] {
   }
 }
 
+/** The terminals of one part id: their ids and, at the same index, their node numbers. */
+interface PartTerminalNodes {
+  ids: string[]
+  nodes: number[]
+}
+
 export interface TerminalNodes {
   nodeCount: number
-  /** "partId:terminal" → node number */
-  nodeOf: Map<string, number>
+  /** "partId:terminal" → node number (built on first read: the analysis itself looks terminals up by part). */
+  readonly nodeOf: Map<string, number>
   /** Per node, the first terminal key on it (for netlists and messages). */
   nodeNames: string[]
   /** Per part, its terminals (with polarity) as the catalogue gives them for this part. */
   terminalsOf: Map<string, TerminalInfo[]>
+  /** Per part id, its terminal ids and their nodes: look-ups without building "partId:terminal" strings. */
+  byPart: Map<string, PartTerminalNodes>
+  /** Per conductor (design order), the node of its from and to terminal, −1 for an unknown terminal. */
+  conductorFrom: Int32Array
+  conductorTo: Int32Array
+}
+
+/** Node of a part's terminal, undefined when the part or the terminal does not exist. */
+export function nodeAt(nodes: TerminalNodes, partId: string, terminal: string): number | undefined {
+  const part = nodes.byPart.get(partId)
+  if (!part) return undefined
+  const i = part.ids.indexOf(terminal)
+  return i < 0 ? undefined : part.nodes[i]
+}
+
+/** Polarity of a part's terminal as the catalogue gives it for this part, undefined when unknown. */
+export function polarityAt(nodes: TerminalNodes, partId: string, terminal: string): TerminalInfo['polarity'] | undefined {
+  const terminals = nodes.terminalsOf.get(partId)
+  if (!terminals) return undefined
+  for (const t of terminals) if (t.id === terminal) return t.polarity
+  return undefined
 }
 
 /** One node per terminal after the internal joins; numbering follows the part order. */
 export function buildTerminalNodes(design: Design): TerminalNodes {
-  const keys: string[] = []
-  const indexOf = new Map<string, number>()
+  // Terminal slots in part order; a repeated part id shares the slots of its terminal ids.
+  const byPart = new Map<string, PartTerminalNodes>()
   const terminalsOf = new Map<string, TerminalInfo[]>()
+  const slotPart: string[] = []
+  const slotTerminal: string[] = []
   for (const part of design.parts) {
     const terminals = partTerminals(part)
     terminalsOf.set(part.id, terminals)
+    let entry = byPart.get(part.id)
+    if (!entry) byPart.set(part.id, (entry = { ids: [], nodes: [] }))
     for (const t of terminals) {
-      const key = terminalKey(part.id, t.id)
-      if (!indexOf.has(key)) {
-        indexOf.set(key, keys.length)
-        keys.push(key)
+      if (entry.ids.includes(t.id)) continue
+      entry.ids.push(t.id)
+      entry.nodes.push(slotPart.length) // the slot for now; replaced by the node below
+      slotPart.push(part.id)
+      slotTerminal.push(t.id)
+    }
+  }
+  const uf = new UnionFind(slotPart.length)
+  for (const part of design.parts) {
+    const entry = byPart.get(part.id)!
+    for (const group of internalJoins(part, terminalsOf.get(part.id) ?? [])) {
+      let first = -1
+      for (const id of group) {
+        const i = entry.ids.indexOf(id)
+        if (i < 0) continue
+        if (first < 0) first = entry.nodes[i]
+        else uf.union(first, entry.nodes[i])
       }
     }
   }
-  const uf = new UnionFind(keys.length)
-  for (const part of design.parts) {
-    const terminals = terminalsOf.get(part.id) ?? []
-    for (const group of internalJoins(part, terminals)) {
-      const present = group.map((id) => indexOf.get(terminalKey(part.id, id))).filter((i): i is number => i !== undefined)
-      for (let i = 1; i < present.length; i++) uf.union(present[0], present[i])
-    }
-  }
-  const nodeOfRoot = new Map<number, number>()
-  const nodeOf = new Map<string, number>()
+  const nodeOfRoot = new Int32Array(slotPart.length).fill(-1)
+  const nodeOfSlot = new Int32Array(slotPart.length)
   const nodeNames: string[] = []
-  for (let i = 0; i < keys.length; i++) {
+  for (let i = 0; i < slotPart.length; i++) {
     const root = uf.find(i)
-    let node = nodeOfRoot.get(root)
-    if (node === undefined) {
-      node = nodeNames.length
-      nodeOfRoot.set(root, node)
-      nodeNames.push(keys[i])
+    if (nodeOfRoot[root] < 0) {
+      nodeOfRoot[root] = nodeNames.length
+      nodeNames.push(terminalKey(slotPart[i], slotTerminal[i]))
     }
-    nodeOf.set(keys[i], node)
+    nodeOfSlot[i] = nodeOfRoot[root]
   }
-  return { nodeCount: nodeNames.length, nodeOf, nodeNames, terminalsOf }
+  for (const entry of byPart.values()) for (let k = 0; k < entry.nodes.length; k++) entry.nodes[k] = nodeOfSlot[entry.nodes[k]]
+
+  const nodes = { nodeCount: nodeNames.length, nodeNames, terminalsOf, byPart } as Omit<TerminalNodes, 'nodeOf' | 'conductorFrom' | 'conductorTo'>
+  const conductorFrom = new Int32Array(design.conductors.length)
+  const conductorTo = new Int32Array(design.conductors.length)
+  design.conductors.forEach((c, i) => {
+    conductorFrom[i] = nodeAt(nodes as TerminalNodes, c.from.partId, c.from.terminal) ?? -1
+    conductorTo[i] = nodeAt(nodes as TerminalNodes, c.to.partId, c.to.terminal) ?? -1
+  })
+  let nodeOf: Map<string, number> | undefined
+  return Object.defineProperty({ ...nodes, conductorFrom, conductorTo }, 'nodeOf', {
+    enumerable: true,
+    get: () => {
+      if (!nodeOf) {
+        nodeOf = new Map()
+        for (let i = 0; i < slotPart.length; i++) nodeOf.set(terminalKey(slotPart[i], slotTerminal[i]), nodeOfSlot[i])
+      }
+      return nodeOf
+    },
+  }) as TerminalNodes
 }

@@ -1,3 +1,4 @@
+import { polarityAt } from '../_lib/terminalNodes'
 import { makeFinding } from '../findings'
 import type { Finding } from '../types'
 import type { Rule } from './types'
@@ -13,14 +14,21 @@ export const connectivityRule: Rule = {
   source: 'Circuit model (every terminal is a node); common practice',
   run(ctx) {
     const findings: Finding[] = []
-    const wired = new Set<string>()
+    // Part id → its terminals with a conductor on them.
+    const wired = new Map<string, string[]>()
+    const wire = (partId: string, terminal: string) => {
+      const list = wired.get(partId)
+      if (list) list.push(terminal)
+      else wired.set(partId, [terminal])
+    }
     for (const c of ctx.design.conductors) {
-      wired.add(`${c.from.partId}:${c.from.terminal}`)
-      wired.add(`${c.to.partId}:${c.to.terminal}`)
+      wire(c.from.partId, c.from.terminal)
+      wire(c.to.partId, c.to.terminal)
     }
     for (const part of ctx.design.parts) {
       const terminals = ctx.nodes.terminalsOf.get(part.id) ?? []
-      const open = terminals.filter((t) => !wired.has(`${part.id}:${t.id}`))
+      const onPart = wired.get(part.id) ?? []
+      const open = terminals.filter((t) => !onPart.includes(t.id))
       if (open.length === terminals.length && terminals.length > 0) {
         findings.push(makeFinding({ ruleId: this.id, severity: 'warning', title: 'Part not connected', partIds: [part.id], conductorIds: [],
           message: `${part.label || part.id} has no conductor on any terminal; it takes no part in the analysis.`, source: this.source }))
@@ -41,7 +49,7 @@ export const conductorPolarityRule: Rule = {
   source: 'Circuit model (terminal polarity from the part catalogue); common practice',
   run(ctx) {
     const findings: Finding[] = []
-    const polarity = (partId: string, terminal: string) => ctx.nodes.terminalsOf.get(partId)?.find((t) => t.id === terminal)?.polarity
+    const polarity = (partId: string, terminal: string) => polarityAt(ctx.nodes, partId, terminal)
     for (const c of ctx.design.conductors) {
       const a = polarity(c.from.partId, c.from.terminal)
       const b = polarity(c.to.partId, c.to.terminal)

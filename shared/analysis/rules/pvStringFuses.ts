@@ -1,5 +1,5 @@
 import { fmt } from '../_lib/finite'
-import { terminalKey } from '../_lib/terminalNodes'
+import { nodeAt } from '../_lib/terminalNodes'
 import { makeFinding } from '../findings'
 import type { Finding } from '../types'
 import { ratingAtMost, ratingPatch } from './suggest'
@@ -35,7 +35,7 @@ export const pvStringFusesRule: Rule = {
   source: SOURCE,
   run(ctx) {
     const findings: Finding[] = []
-    const node = (partId: string, t: string) => ctx.nodes.nodeOf.get(terminalKey(partId, t))
+    const node = (partId: string, t: string) => nodeAt(ctx.nodes, partId, t)
     const adjacency = new Map<number, number[]>()
     const link = (a: number, b: number) => { adjacency.set(a, [...(adjacency.get(a) ?? []), b]) }
     for (const s of ctx.conductors) {
