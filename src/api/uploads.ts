@@ -1,7 +1,8 @@
 import type { Attachment } from '@shared/api/uploads.schemas'
 import { ApiError, http } from './http'
 
-export const listAttachments = (projectId: string) => http.get<Attachment[]>(`/projects/${projectId}/attachments`)
+export const listAttachments = (projectId: string, partId?: string) =>
+  http.get<Attachment[]>(`/projects/${projectId}/attachments${partId ? `?partId=${encodeURIComponent(partId)}` : ''}`)
 export const deleteAttachment = (projectId: string, id: string) => http.delete(`/projects/${projectId}/attachments/${id}`)
 export const attachmentUrl = (projectId: string, id: string) => `/api/projects/${projectId}/attachments/${id}/download`
 

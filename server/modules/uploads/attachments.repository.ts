@@ -21,9 +21,11 @@ export async function insertAttachment(db: DbOrTx, values: typeof attachments.$i
   return row.id
 }
 
-export async function listAttachments(db: DbOrTx, projectId: string) {
+/** The project's files, newest first; only one part's when partId is given. */
+export async function listAttachments(db: DbOrTx, projectId: string, partId?: string) {
+  const where = partId ? and(eq(attachments.projectId, projectId), eq(attachments.partId, partId)) : eq(attachments.projectId, projectId)
   return db.select(columns).from(attachments).leftJoin(users, eq(users.id, attachments.uploadedBy))
-    .where(eq(attachments.projectId, projectId)).orderBy(desc(attachments.createdAt), desc(attachments.id))
+    .where(where).orderBy(desc(attachments.createdAt), desc(attachments.id))
 }
 
 export async function findAttachment(db: DbOrTx, projectId: string, id: string) {

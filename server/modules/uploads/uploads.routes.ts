@@ -90,10 +90,12 @@ export function uploadsRoutes(deps: RouteDeps): Router {
     }
   })
 
-  router.get('/', requirePermission('project.read'), projectInput, async (req, res) => {
-    const projectId = projectInput.data(req).params.id
-    await getProject(db, actorOf(req), projectId)
-    res.json((await listAttachments(db, projectId)).map(toAttachment))
+  // ?partId= lists the files of one part only (the editor's part inspector).
+  const listInput = validate({ params, query: z.object({ partId: partIdSchema }) })
+  router.get('/', requirePermission('project.read'), listInput, async (req, res) => {
+    const { params: p, query } = listInput.data(req)
+    await getProject(db, actorOf(req), p.id)
+    res.json((await listAttachments(db, p.id, query.partId)).map(toAttachment))
   })
 
   const oneInput = validate({ params: params.extend({ attachmentId: idParam }) })
