@@ -57,6 +57,20 @@ describe('attachments', () => {
     expect(list.body.find((a: { filename: string }) => a.filename === 'bus.png').partId).toBe('pos-bus')
   })
 
+  it("lists one part's files with ?partId= (any reader), and refuses a malformed part id with 400", async () => {
+    const res = await upload(designer, PDF, 'fridge datasheet.pdf', { partId: 'fridge' })
+    expect(res.status).toBe(201)
+    const mine = await reviewer.get(`/api/projects/${projectId}/attachments?partId=fridge`)
+    expect(mine.status).toBe(200)
+    expect(mine.body.map((a: { id: string }) => a.id)).toEqual([res.body.id])
+    expect((await reviewer.get(`/api/projects/${projectId}/attachments?partId=no-files-here`)).body).toEqual([])
+    const all = await reviewer.get(`/api/projects/${projectId}/attachments`)
+    expect(all.body.length).toBeGreaterThan(1)
+    const bad = await reviewer.get(`/api/projects/${projectId}/attachments?partId=${encodeURIComponent('not an id!')}`)
+    expect(bad.status).toBe(400)
+    expect(bad.body.error.fields[0].path).toBe('partId')
+  })
+
   it('refuses a file over the limit with 413 and a clear message', async () => {
     const big = Buffer.concat([PDF, Buffer.alloc(UPLOAD_MAX_BYTES)])
     const res = await upload(designer, big, 'huge.pdf')
