@@ -1,4 +1,4 @@
-import type { Approval, ApprovalInput, CreatedShareLink, ShareLink, ShareLinkInput, SharedProjectView } from '@shared/api/shares.schemas'
+import type { Approval, ApprovalInput, CreatedShareLink, EmailedShareLink, ShareLink, ShareLinkEmailInput, ShareLinkInput, SharedProjectView } from '@shared/api/shares.schemas'
 import { http } from './http'
 
 const enc = encodeURIComponent
@@ -14,3 +14,5 @@ export const listShareLinks = (projectId: string) => http.get<ShareLink[]>(`/pro
 export const createShareLink = (projectId: string, input: ShareLinkInput) => http.post<CreatedShareLink>(`/projects/${projectId}/share-links`, input)
 export const revokeShareLink = (projectId: string, linkId: string) => http.delete(`/projects/${projectId}/share-links/${linkId}`)
 export const listApprovals = (projectId: string) => http.get<Approval[]>(`/projects/${projectId}/approvals`)
+export const emailShareLink = (projectId: string, linkId: string, input: ShareLinkEmailInput) =>
+  http.post<EmailedShareLink>(`/projects/${projectId}/share-links/${linkId}/email`, input)
