@@ -3,9 +3,9 @@ import { point } from './_point'
 
 // Glass and ceramic cartridge fuses. 5 × 20 mm: IEC 60127-2 pre-arcing limits; 6.3 × 32 mm: UL 248-14
 // (supplemental fuses). Pre-arcing time is used as clearing time: at these voltages the arcing time of
-// a miniature fuse is a small part of the total (recalled, unverified).
+// a miniature fuse is a small part of the total (recalled, unverified). Sources are named on every point.
 
-const SHEET_5 = 'IEC 60127-2 standard sheet 5 (time-lag, high breaking), two datasheets agree'
+const SHEET_5 = "IEC 60127-2 standard sheet 5 (time-lag T, high breaking), as stated by two makers' datasheets that declare conformity and agree"
 const SHEETS_1_2 = 'IEC 60127-2 standard sheets 1/2 (fast-acting) (recalled, unverified)'
 const SPEED_F = 'IEC 60127 speed letter F: 1–10 ms pre-arcing at 10 In (recalled, unverified)'
 
@@ -13,12 +13,13 @@ const SPEED_F = 'IEC 60127 speed letter F: 1–10 ms pre-arcing at 10 In (recall
 function timeLag5x20(ratingA: number): BandDefinition {
   // 1.5 In: ≥ 1 h, but ≥ 30 min at 8–10 A and ≥ 15 min at 12.5–16 A (datasheet B).
   const carryS = ratingA <= 6.3 ? 3600 : ratingA <= 10 ? 1800 : 900
+  const carryNote = ratingA <= 6.3 ? '' : ` (datasheet B, ${ratingA <= 10 ? '8–10 A' : '12.5–16 A'}; A says ≥ 1 h)`
   const small = ratingA <= 3.15
   return {
     kind: 'fuse',
     timeDelay: true,
     minMelt: [
-      point(1.5, carryS, `${SHEET_5}: 1.5 In ≥ ${carryS / 60} min`, 'two-sources'),
+      point(1.5, carryS, `${SHEET_5}: 1.5 In ≥ ${carryS / 60} min${carryNote}`, 'two-sources'),
       point(2.75, 0.75, `${SHEET_5}: 2.75 In ≥ 0.75 s (datasheet B; A says 1 s)`, 'two-sources'),
       point(4, small ? 0.095 : 0.15, `${SHEET_5}: 4 In ≥ ${small ? '95 ms (≤ 3.15 A)' : '150 ms (≥ 4 A)'}`, 'two-sources'),
       point(10, small ? 0.01 : 0.02, `${SHEET_5}: 10 In ≥ ${small ? '10 ms (≤ 3.15 A)' : '20 ms (≥ 4 A)'}`, 'two-sources'),
@@ -54,8 +55,8 @@ function fast5x20(): BandDefinition {
   }
 }
 
-const UL_248_14 = 'UL 248-14 (supplemental fuses), as published in a fuse maker\'s guide to the standard'
-const CARRY_4H = 'UL 248-14: carries 100 % (verified); 4 h is the usual datasheet duration (recalled)'
+const UL_248_14 = "UL 248-14 (supplemental fuses) overload opening limits, as published in a fuse maker's guide to the standard"
+const CARRY_4H = "UL 248-14 carries 100 % (a fuse maker's guide to the standard); the 4 h duration is the usual datasheet figure (recalled, unverified)"
 
 /** UL 248-14 opening limits: 135 % within 1 h; 200 % within 2 min (0–30 A) or 4 min (35–60 A). */
 function ul248_14MaxClear(ratingA: number) {
@@ -76,7 +77,7 @@ function fast6x32(ratingA: number): BandDefinition {
       point(10, 0.001, SPEED_F, 'recalled'),
     ],
     maxClear: ul248_14MaxClear(ratingA),
-    source: `${UL_248_14}; minimum melting recalled; above 200 % the guaranteed clearing is extended at constant I²t (computed)`,
+    source: `${UL_248_14}; minimum melting recalled, unverified; above 200 % the guaranteed clearing is extended at constant I²t (computed)`,
   }
 }
 
@@ -89,7 +90,7 @@ function timeDelay6x32(ratingA: number): BandDefinition {
       point(2, 5, 'Time-delay supplemental fuse, 200 % melts after ≥ 5 s (datasheet convention, recalled, unverified)', 'recalled'),
     ],
     maxClear: ul248_14MaxClear(ratingA),
-    source: `${UL_248_14}; time-delay minimum recalled; beyond 200 % extended at constant I²t (computed)`,
+    source: `${UL_248_14}; time-delay minimum recalled, unverified; beyond 200 % extended at constant I²t (computed)`,
   }
 }
 

@@ -87,16 +87,16 @@ function gPv(): BandDefinition {
     kind: 'fuse',
     timeDelay: false,
     minMelt: [
-      point(1.13, 3600, `${GPV} conventional non-fusing current 1.13 In for 1 h (Table 101 exists; value recalled)`, 'recalled'),
+      point(1.13, 3600, `${GPV} conventional non-fusing current 1.13 In for 1 h (Table 101 exists; the value is recalled, unverified)`, 'recalled'),
       point(2.06, 10, `${GG_GATES}: 33 A (2.06 In) ≥ 10 s`, 'recalled'),
       point(5.3, 0.1, `${GG_GATES}: 85 A (5.3 In) ≥ 0.1 s`, 'recalled'),
     ],
     maxClear: [
-      point(1.45, 3600, `${GPV} conventional fusing current 1.45 In within 1 h (Table 101 exists; value recalled)`, 'recalled'),
+      point(1.45, 3600, `${GPV} conventional fusing current 1.45 In within 1 h (Table 101 exists; the value is recalled, unverified)`, 'recalled'),
       point(4.06, 5, `${GG_GATES}: 65 A (4.06 In) ≤ 5 s`, 'recalled'),
       point(9.4, 0.1, `${GG_GATES}: 150 A (9.4 In) ≤ 0.1 s`, 'recalled'),
     ],
-    source: `${GPV} conventional currents (recalled) and ${GG_GATES}`,
+    source: `${GPV} conventional currents (recalled, unverified) and ${GG_GATES}`,
   }
 }
 
