@@ -123,7 +123,8 @@ describe('deliverables', () => {
     const { page, errors } = await pageAs(org.designer)
     await page.goto(`${server.baseUrl}/projects/${projectId}`)
     await page.locator(`[data-test="email-link-${old.id}"]`).waitFor({ timeout: 15_000 })
-    expect(await page.locator(`[data-test="email-link-${old.id}"]`).textContent()).toContain('re-create to e-mail')
+    expect(await page.locator(`[data-test="email-link-${old.id}"]`).getAttribute('title')).toContain('make a new link to send it by e-mail')
+    expect(await page.locator('[data-test="share-links-not-kept"]').textContent()).toContain('make a new link to send one of these by e-mail')
 
     await page.locator(`[data-test="email-link-${created.body.id}"]`).click()
     const dialog = page.locator('[data-test="share-email-dialog"]')
