@@ -11,6 +11,7 @@ import { MESSAGE_AWARENESS, MESSAGE_SYNC } from '../../shared/collab/protocol'
 import type { Db } from '../db/client'
 import { compactState } from './designState.repository'
 import type { LoadedDesignDoc } from './loadDesignDoc'
+import type { LatencyHistogram } from './latencyHistogram'
 import type { UpdateCommitter } from './updateCommitter'
 
 /** A connection as the room sees it. */
@@ -19,7 +20,7 @@ export interface RoomPeer {
 }
 
 type QueueEntry =
-  | { kind: 'update'; update: Uint8Array; origin: RoomPeer | null; userId: string | null; done: Settle }
+  | { kind: 'update'; update: Uint8Array; origin: RoomPeer | null; userId: string | null; receivedAt: number; done: Settle }
   | { kind: 'task'; run: () => Promise<void> }
 
 interface Settle {
@@ -58,7 +59,7 @@ export class DesignRoom {
 
   constructor(
     readonly projectId: string,
-    private readonly storage: { db: Db; committer: UpdateCommitter },
+    private readonly storage: { db: Db; committer: UpdateCommitter; latency: LatencyHistogram },
     loaded: LoadedDesignDoc,
     private readonly options: RoomOptions,
   ) {
@@ -123,7 +124,7 @@ export class DesignRoom {
   /** Resolves once the update is committed, applied and broadcast (to every peer but `origin`). */
   submitUpdate(update: Uint8Array, origin: RoomPeer | null, userId: string | null): Promise<void> {
     return new Promise((resolve, reject) => {
-      this.queue.push({ kind: 'update', update, origin, userId, done: { resolve, reject } })
+      this.queue.push({ kind: 'update', update, origin, userId, receivedAt: performance.now(), done: { resolve, reject } })
       void this.drain()
     })
   }
@@ -141,7 +142,7 @@ export class DesignRoom {
     return this.exclusive(async () => {
       const update = makeUpdate(this.doc)
       if (!update) return false
-      await this.store([{ kind: 'update', update, origin: null, userId, done: { resolve() {}, reject() {} } }])
+      await this.store([{ kind: 'update', update, origin: null, userId, receivedAt: performance.now(), done: { resolve() {}, reject() {} } }])
       return true
     })
   }
@@ -191,6 +192,7 @@ export class DesignRoom {
       Y.applyUpdate(this.doc, entry.update, entry.origin)
       const out = message(MESSAGE_SYNC, (e) => syncProtocol.writeUpdate(e, entry.update))
       for (const peer of this.peers.keys()) if (peer !== entry.origin) peer.send(out)
+      this.storage.latency.record(performance.now() - entry.receivedAt)
     }
     if (this.uncompacted >= this.options.compactEvery) this.startCompaction()
   }

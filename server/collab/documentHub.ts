@@ -3,6 +3,7 @@
 // (One server process per database: two processes would each hold their own room.)
 import type { Db } from '../db/client'
 import { createAccessEvents, type AccessEvents } from './accessEvents'
+import { LatencyHistogram } from './latencyHistogram'
 import { DesignRoom, type RoomOptions } from './designRoom'
 import { loadDesignDoc } from './loadDesignDoc'
 import { createUpdateCommitter, type CommitterOptions, type UpdateCommitter } from './updateCommitter'
@@ -26,11 +27,14 @@ export interface DocumentHub {
   readonly committer: UpdateCommitter
   /** Member and share changes for open connections (the services emit, the collab server follows). */
   readonly access: AccessEvents
+  /** Arrival → broadcast time of every stored update. */
+  readonly latency: LatencyHistogram
 }
 
 export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>; committer?: Partial<CommitterOptions> }): DocumentHub {
   const options = { ...DEFAULT_ROOM_OPTIONS, ...deps.options }
   const committer = createUpdateCommitter(deps.db, { ...DEFAULT_COMMITTER_OPTIONS, ...deps.committer })
+  const latency = new LatencyHistogram()
   const rooms = new Map<string, { opening: Promise<DesignRoom | undefined>; room?: DesignRoom }>()
 
   async function acquire(projectId: string): Promise<DesignRoom | undefined> {
@@ -40,7 +44,7 @@ export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>
         const created: { opening: Promise<DesignRoom | undefined>; room?: DesignRoom } = {
           opening: loadDesignDoc(deps.db, projectId, { storeConversion: true }).then((loaded) => {
             if (!loaded) return undefined
-            created.room = new DesignRoom(projectId, { db: deps.db, committer }, loaded, options)
+            created.room = new DesignRoom(projectId, { db: deps.db, committer, latency }, loaded, options)
             return created.room
           }),
         }
@@ -72,6 +76,7 @@ export function createDocumentHub(deps: { db: Db; options?: Partial<RoomOptions>
 
   return {
     committer,
+    latency,
     access: createAccessEvents(),
     acquire,
     release,

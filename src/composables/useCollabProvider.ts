@@ -1,11 +1,26 @@
 // The open design's live link: a y-websocket provider on ws(s)://<host>/collab/<projectId> (the room
 // name is the project id), its connection state for the toolbar, and the local presence state.
+// The server's 44xx close codes (session ended, access removed) stop the reconnecting and become a
+// status the toolbar explains; a role change on an open connection arrives as an auth message.
 import { WebsocketProvider } from 'y-websocket'
+import * as authProtocol from 'y-protocols/auth'
 import * as Y from 'yjs'
 import { computed, ref, shallowRef, type Ref } from 'vue'
-import { COLLAB_PATH_PREFIX, type CollabAwarenessState } from '@shared/collab/protocol'
+import { COLLAB_CLOSE, COLLAB_PATH_PREFIX, MESSAGE_AUTH, parseAccessNotice, type CollabAwarenessState } from '@shared/collab/protocol'
 
-export type CollabStatus = 'live' | 'reconnecting' | 'offline'
+/**
+ * live / reconnecting / offline: the link itself. The rest are final until a reload: sessionEnded
+ * (4401), accessRemoved (4403, 4404), roleChanged (an owner changed this member's role), closed (any
+ * other close the server meant as final).
+ */
+export type CollabStatus = 'live' | 'reconnecting' | 'offline' | 'sessionEnded' | 'accessRemoved' | 'roleChanged' | 'closed'
+
+/** The status a final close code stands for. */
+export function statusForClose(code: number): CollabStatus {
+  if (code === COLLAB_CLOSE.sessionEnded) return 'sessionEnded'
+  if (code === COLLAB_CLOSE.accessRemoved || code === COLLAB_CLOSE.notFound) return 'accessRemoved'
+  return 'closed'
+}
 
 export interface CollabPeer extends CollabAwarenessState {
   clientId: number
@@ -55,6 +70,16 @@ export async function connectCollab(projectId: string, user: { id: string; name:
   const browserOnline = ref(navigator.onLine)
   const failedAttempts = ref(0)
   const peers = shallowRef<CollabPeer[]>([])
+  const finalClose = ref<{ code: number; reason: string } | null>(null)
+  const roleChanged = ref(false)
+
+  // y-websocket stops reconnecting on 4400–4499 and emits 'closed' with the code.
+  provider.on('closed', (event: { code: number; reason: string }) => (finalClose.value = event))
+  provider.messageHandlers[MESSAGE_AUTH] = (_encoder, decoder) => {
+    authProtocol.readAuthMessage(decoder, doc, (_doc, reason) => {
+      if (parseAccessNotice(reason)) roleChanged.value = true
+    })
+  }
 
   provider.on('status', ({ status }: { status: string }) => {
     connected.value = status === 'connected'
@@ -67,6 +92,8 @@ export async function connectCollab(projectId: string, user: { id: string; name:
   window.addEventListener('offline', onOffline)
 
   const status = computed<CollabStatus>(() => {
+    if (finalClose.value) return statusForClose(finalClose.value.code)
+    if (roleChanged.value) return 'roleChanged'
     if (connected.value) return 'live'
     return !browserOnline.value || failedAttempts.value >= OFFLINE_AFTER_ATTEMPTS ? 'offline' : 'reconnecting'
   })
@@ -110,6 +137,11 @@ export async function connectCollab(projectId: string, user: { id: string; name:
     provider.once('sync', (isSynced: boolean) => {
       clearTimeout(timer)
       resolve(isSynced)
+    })
+    // Refused for good before the first sync: no need to wait (the page's own requests say why).
+    provider.once('closed', () => {
+      clearTimeout(timer)
+      resolve(false)
     })
   })
   if (!synced) {

@@ -4,7 +4,10 @@
 // Prints update propagation latency (send → seen by each other client of the design, so it includes
 // the commit to PostgreSQL before the broadcast), the server's CPU and peak memory, and lost updates
 // (edits some other client never saw, plus final positions the stored design does not hold).
+// Also printed, to read the figures on a shared machine: the server's own arrival → broadcast time,
+// rows per commit (group commit), and this process's CPU and event-loop delay (the clients' side).
 import { randomBytes } from 'node:crypto'
+import { monitorEventLoopDelay } from 'node:perf_hooks'
 import * as Y from 'yjs'
 import { createDemoDesign } from '../../shared/design/demo'
 import { loadConfig } from '../../server/config'
@@ -77,6 +80,9 @@ export async function run(): Promise<void> {
   }
 
   const before = await server.usage()
+  const loopDelay = monitorEventLoopDelay({ resolution: 10 })
+  loopDelay.enable()
+  const clientCpuBefore = process.cpuUsage()
   const startedAt = performance.now()
   const timers = clients.map((client) => {
     const tick = () => {
@@ -99,6 +105,8 @@ export async function run(): Promise<void> {
   timers.forEach((stop) => stop())
   const runSeconds = (performance.now() - startedAt) / 1000
   const after = await server.usage()
+  const clientCpu = process.cpuUsage(clientCpuBefore)
+  loopDelay.disable()
 
   await Promise.all(clients.map((c) => c.raw.flush(30_000)))
   const expected = (client: BenchClient) => byDesign(client.design).filter((p) => p !== client).reduce((n, p) => n + p.sent, 0)
@@ -128,4 +136,16 @@ export async function run(): Promise<void> {
   console.log(`server CPU           ${cpuS.toFixed(1)} s over the run (${((100 * cpuS) / runSeconds).toFixed(0)} % of one core)`)
   console.log(`server peak memory   ${(after.maxRssKb / 1024).toFixed(0)} MB resident`)
   console.log(`lost updates         ${lost}`)
+  const inServer = after.updateLatency
+  console.log(
+    `in the server        arrival → broadcast p50 ${inServer.p50Ms.toFixed(1)} ms   p95 ${inServer.p95Ms.toFixed(1)} ms   max ${inServer.maxMs.toFixed(1)} ms (${inServer.count} updates)`,
+  )
+  const commits = after.commits.commits - before.commits.commits
+  const rows = after.commits.rows - before.commits.rows
+  console.log(`group commit         ${commits} commits for ${rows} updates (${(rows / Math.max(1, commits)).toFixed(1)} per commit)`)
+  const clientCpuS = (clientCpu.user + clientCpu.system) / 1e6
+  console.log(
+    `bench clients        CPU ${clientCpuS.toFixed(1)} s (${((100 * clientCpuS) / runSeconds).toFixed(0)} % of one core), event-loop delay p50 ${(loopDelay.percentile(50) / 1e6).toFixed(1)} ms p99 ${(loopDelay.percentile(99) / 1e6).toFixed(1)} ms`,
+  )
+  console.log(`machine load         ${(await import('node:os')).loadavg().map((l) => l.toFixed(1)).join(' ')} (1/5/15 min)`)
 }

@@ -6,12 +6,21 @@ import { fileURLToPath } from 'node:url'
 
 const SCRIPT = path.join(path.dirname(fileURLToPath(import.meta.url)), 'collab-server-process.ts')
 
+export interface ChildUsage {
+  cpuUserUs: number
+  cpuSystemUs: number
+  maxRssKb: number
+  /** Arrival → broadcast inside the server (queue wait, commit, apply). */
+  updateLatency: { count: number; p50Ms: number; p95Ms: number; maxMs: number }
+  commits: { commits: number; rows: number }
+}
+
 export interface ChildServer {
   baseUrl: string
   process: ChildProcess
   /** SIGKILL, resolved once the process is gone. */
   kill(): Promise<void>
-  usage(): Promise<{ cpuUserUs: number; cpuSystemUs: number; maxRssKb: number }>
+  usage(): Promise<ChildUsage>
 }
 
 export function startChildServer(env: { databaseUrl: string; jwtSecret: string; port?: number; compactEvery?: number }): Promise<ChildServer> {
@@ -47,7 +56,7 @@ export function startChildServer(env: { databaseUrl: string; jwtSecret: string; 
         },
         usage() {
           return new Promise((resolveUsage) => {
-            const onMessage = (message: { type?: string; cpuUserUs: number; cpuSystemUs: number; maxRssKb: number }) => {
+            const onMessage = (message: ChildUsage & { type?: string }) => {
               if (message?.type !== 'usage') return
               child.off('message', onMessage)
               resolveUsage(message)

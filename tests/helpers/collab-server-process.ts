@@ -1,7 +1,8 @@
 // The app with its /collab endpoint as a separate process, for tests that kill it (SIGKILL) and for the
 // bench (which reads its CPU time and peak memory over IPC). Started as
 //   node --import tsx tests/helpers/collab-server-process.ts   (env: DATABASE_URL, PORT, AMPWRIGHT_JWT_SECRET)
-// Prints "ready <port>" once listening. IPC: { type: 'usage' } → { type: 'usage', cpuUserUs, cpuSystemUs, maxRssKb }.
+// Prints "ready <port>" once listening. IPC: { type: 'usage' } → { type: 'usage', cpuUserUs, cpuSystemUs, maxRssKb,
+// updateLatency (arrival → broadcast in the server), commits: { commits, rows } }.
 import http from 'node:http'
 import type { AddressInfo } from 'node:net'
 import { createApp } from '../../server/app'
@@ -25,5 +26,12 @@ server.listen(config.port, '127.0.0.1', () => {
 process.on('message', (message: { type?: string }) => {
   if (message?.type !== 'usage') return
   const cpu = process.cpuUsage()
-  process.send?.({ type: 'usage', cpuUserUs: cpu.user, cpuSystemUs: cpu.system, maxRssKb: process.resourceUsage().maxRSS })
+  process.send?.({
+    type: 'usage',
+    cpuUserUs: cpu.user,
+    cpuSystemUs: cpu.system,
+    maxRssKb: process.resourceUsage().maxRSS,
+    updateLatency: hub.latency.summary(),
+    commits: { ...hub.committer.stats },
+  })
 })
