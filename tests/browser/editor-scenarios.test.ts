@@ -1,44 +1,31 @@
 // Scenarios and the bottom panel in Debian's chromium against the real server and a built client:
 // add a scenario, rename it, turn a load off, show it and see findings and currents follow, undo;
 // then a generated 500-part design whose tables draw only the rows in view. Screenshots at 1280×720.
-import fs from 'node:fs'
-import os from 'node:os'
 import path from 'node:path'
-import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { makeConductor, makePart } from '../../shared/design/builder'
 import type { Design, DesignSettings } from '../../shared/design/schema'
 import { generatedDesign } from '../helpers/generatedDesign'
-import { startTestServer, type TestServer } from '../helpers/server'
-import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
+import { startBrowserSession, type BrowserSession } from '../helpers/browserSession'
 
 const ROOT = path.resolve(import.meta.dirname, '../..')
 // A client built elsewhere may be named here (a path without dot-folders: the server will not send from those).
 const CLIENT_DIR = process.env.AMPWRIGHT_CLIENT_DIR ?? path.join(ROOT, 'dist')
 
-let server: TestServer
-let context: BrowserContext
+let session: BrowserSession
 let page: Page
-let profileDir: string
-const pageErrors: string[] = []
-const serverErrors: string[] = []
-
 const suffix = Math.random().toString(36).slice(2, 8)
 const poll = <T>(fn: () => Promise<T> | T, timeout = 20_000) => expect.poll(fn, { timeout, interval: 100 })
-const shot = (name: string) => page.screenshot({ path: path.join(SCREENSHOTS_DIR, `${name}.png`) })
-
-async function api(method: 'post' | 'get' | 'put', url: string, data?: unknown) {
-  const res = await page.request[method](`${server.baseUrl}/api${url}`, { headers: { Origin: server.baseUrl }, data })
-  expect(res.ok(), `${method} ${url} → ${res.status()} ${await res.text()}`).toBe(true)
-  return res.json()
-}
+const api: BrowserSession['api'] = (...args) => session.api(...args)
+const shot = (name: string) => session.shot(name)
 
 /** A project holding `design`, opened in the editor. */
 async function openDesign(name: string, design: Design): Promise<void> {
   const project = await api('post', '/projects', { name, installationKind: 'vehicle', nominalVoltageV: 24 })
   const stored = await api('get', `/projects/${project.id}/design`)
   await api('put', `/projects/${project.id}/design`, { design, baseRevision: stored.revision })
-  await page.goto(`${server.baseUrl}/projects/${project.id}/design`)
+  await page.goto(`${session.server.baseUrl}/projects/${project.id}/design`)
   await page.locator('.editor-canvas').waitFor().catch(async (error) => {
     throw new Error(`the editor did not open: ${(await page.locator('body').innerText()).slice(0, 400)}`, { cause: error })
   })
@@ -76,22 +63,8 @@ const currentOf = async (id: string) => (await scheduleRow(id).locator('td').nth
 const dialog = () => page.locator('[data-testid="scenario-dialog"]')
 
 beforeAll(async () => {
-  if (!fs.existsSync(path.join(CLIENT_DIR, 'index.html'))) throw new Error(`no client build in ${CLIENT_DIR}: run \`npx vite build\` first`)
-  fs.mkdirSync(SCREENSHOTS_DIR, { recursive: true })
-  server = await startTestServer({ serveClient: true, config: { clientDir: CLIENT_DIR } })
-  profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-scenarios-'))
-  context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: CHROMIUM_PATH,
-    headless: true,
-    args: CHROMIUM_ARGS,
-    viewport: { width: 1280, height: 720 },
-  })
-  page = context.pages()[0] ?? (await context.newPage())
-  page.on('pageerror', (err) => pageErrors.push(err.message))
-  page.on('response', (res) => {
-    if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
-  })
-  await page.goto(server.baseUrl)
+  session = await startBrowserSession({ clientDir: CLIENT_DIR })
+  page = session.page
   await api('post', '/auth/signup', {
     name: 'Maren Oduya',
     email: `maren.${suffix}@oduya-campers.test`,
@@ -101,9 +74,7 @@ beforeAll(async () => {
 })
 
 afterAll(async () => {
-  await context?.close()
-  await server?.close()
-  if (profileDir) fs.rmSync(profileDir, { recursive: true, force: true })
+  await session?.close()
 })
 
 describe('scenarios in the browser', () => {
@@ -160,8 +131,8 @@ describe('scenarios in the browser', () => {
     await poll(() => page.locator('[data-testid="scenario-select"]').innerText()).toContain('Parked')
     await page.locator('[data-tab="findings"]').click()
     await poll(() => fuseOpens().count()).toBe(0)
-    expect(pageErrors).toEqual([])
-    expect(serverErrors).toEqual([])
+    expect(session.pageErrors).toEqual([])
+    expect(session.serverErrors).toEqual([])
   })
 
   it('keeps a 500-part design’s tables to the rows in view, sortable and selectable', async () => {
@@ -205,7 +176,7 @@ describe('scenarios in the browser', () => {
     await shot('bottom-panel-devices-500')
     const text = await page.locator('.bottom-panel').innerText()
     expect(text).not.toMatch(/\bNaN\b|\bundefined\b|Infinity/)
-    expect(pageErrors).toEqual([])
-    expect(serverErrors).toEqual([])
+    expect(session.pageErrors).toEqual([])
+    expect(session.serverErrors).toEqual([])
   })
 })

@@ -1,0 +1,66 @@
+// One browser test's world: the real server serving a built client, Debian's chromium on a fresh
+// profile, the page's errors and the server's 5xx answers collected for the test to check, and an
+// API helper that calls the server with the page's session cookie.
+import fs from 'node:fs'
+import os from 'node:os'
+import path from 'node:path'
+import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import { expect } from 'vitest'
+import { startTestServer, type TestServer } from './server'
+import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from './browser'
+
+export interface BrowserSession {
+  server: TestServer
+  context: BrowserContext
+  page: Page
+  /** Uncaught errors in the page. */
+  pageErrors: string[]
+  /** Server answers with status 500 or more. */
+  serverErrors: string[]
+  /** Calls /api<url> as the signed-in page; fails the test on a non-2xx answer. */
+  api(method: 'get' | 'post' | 'put', url: string, data?: unknown): Promise<any>
+  /** Saves a screenshot of the page under SCREENSHOTS_DIR/<name>.png. */
+  shot(name: string): Promise<Buffer>
+  close(): Promise<void>
+}
+
+export async function startBrowserSession(options: { clientDir: string; viewport?: { width: number; height: number } }): Promise<BrowserSession> {
+  if (!fs.existsSync(path.join(options.clientDir, 'index.html'))) {
+    throw new Error(`no client build in ${options.clientDir}: run \`npx vite build\` first`)
+  }
+  fs.mkdirSync(SCREENSHOTS_DIR, { recursive: true })
+  const server = await startTestServer({ serveClient: true, config: { clientDir: options.clientDir } })
+  const profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-browser-'))
+  const context = await chromium.launchPersistentContext(profileDir, {
+    executablePath: CHROMIUM_PATH,
+    headless: true,
+    args: CHROMIUM_ARGS,
+    viewport: options.viewport ?? { width: 1280, height: 720 },
+  })
+  const page = context.pages()[0] ?? (await context.newPage())
+  const pageErrors: string[] = []
+  const serverErrors: string[] = []
+  page.on('pageerror', (err) => pageErrors.push(err.message))
+  page.on('response', (res) => {
+    if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
+  })
+  await page.goto(server.baseUrl)
+  return {
+    server,
+    context,
+    page,
+    pageErrors,
+    serverErrors,
+    async api(method, url, data) {
+      const res = await page.request[method](`${server.baseUrl}/api${url}`, { headers: { Origin: server.baseUrl }, data })
+      expect(res.ok(), `${method} ${url} → ${res.status()} ${await res.text()}`).toBe(true)
+      return res.json()
+    },
+    shot: (name) => page.screenshot({ path: path.join(SCREENSHOTS_DIR, `${name}.png`) }),
+    async close() {
+      await context.close()
+      await server.close()
+      fs.rmSync(profileDir, { recursive: true, force: true })
+    },
+  }
+}
