@@ -78,7 +78,7 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
   }
   const pvGroups = buildPvGroups(design, prepared.passive!.arraysOfController)
   const faults = faultStudy(design, prepared, topology)
-  const conductors = conductorStats(design, solves, topology, faults.conductorFarEndA, pvGroups, devices)
+  const conductors = conductorStats(design, solves, topology, faults.conductorFarEndA, pvGroups, devices, prepared.passive!)
   const deviceList = deviceStats(design, devices, solves, topology, faults.deviceFaultA, pvGroups, conductorsAt, conductors)
   const ctx: RuleContext = {
     design, profile: design.settings.profile, nominalV: design.settings.nominalVoltageV,
@@ -123,22 +123,33 @@ function buildPvGroups(design: Design, byController: Map<string, PartOf<'pv-arra
 
 /** Highest |current| per part over the scenarios; a bus bar's is the total fed into it. */
 function partMaxCurrents(design: Design, solves: ScenarioSolve[]): Map<string, { currentA: number; scenarioId: string }> {
-  const result = new Map<string, { currentA: number; scenarioId: string }>()
-  const note = (id: string, currentA: number, scenarioId: string) => {
-    const seen = result.get(id)
-    if (currentA > 0 && (!seen || currentA > seen.currentA)) result.set(id, { currentA: finite(currentA), scenarioId })
+  const { parts, conductors } = design
+  // Worst so far per part (design order) and the scenario it came from (index, −1 none).
+  const worstA = new Float64Array(parts.length)
+  const worstScenario = new Int32Array(parts.length).fill(-1)
+  const note = (k: number, currentA: number, scenario: number) => {
+    if (currentA > 0 && (worstScenario[k] < 0 || currentA > worstA[k])) { worstA[k] = finite(currentA); worstScenario[k] = scenario }
   }
-  const busIds = new Set(design.parts.filter((p) => p.type === 'bus-bar').map((p) => p.id))
-  for (const s of solves) {
-    design.parts.forEach((part, k) => note(part.id, Math.abs(s.partCurrentA[k]), s.scenario.id))
-    const inflow = new Map<string, number>()
-    design.conductors.forEach((c, i) => {
+  // The bus bar at each conductor end (its part position, −1 when the end is on another part).
+  const busIndex = new Map<string, number>()
+  parts.forEach((p, k) => { if (p.type === 'bus-bar') busIndex.set(p.id, k) })
+  const toBus = conductors.map((c) => busIndex.get(c.to.partId) ?? -1)
+  const fromBus = conductors.map((c) => busIndex.get(c.from.partId) ?? -1)
+  const inflow = new Float64Array(parts.length)
+  const fed = new Uint8Array(parts.length)
+  solves.forEach((s, scenario) => {
+    for (let k = 0; k < parts.length; k++) note(k, Math.abs(s.partCurrentA[k]), scenario)
+    inflow.fill(0)
+    fed.fill(0)
+    for (let i = 0; i < conductors.length; i++) {
       const amps = s.conductorCurrentA[i] // from → to
-      if (busIds.has(c.to.partId) && amps > 0) inflow.set(c.to.partId, (inflow.get(c.to.partId) ?? 0) + amps)
-      if (busIds.has(c.from.partId) && amps < 0) inflow.set(c.from.partId, (inflow.get(c.from.partId) ?? 0) - amps)
-    })
-    for (const [id, amps] of inflow) note(id, amps, s.scenario.id)
-  }
+      if (toBus[i] >= 0 && amps > 0) { inflow[toBus[i]] += amps; fed[toBus[i]] = 1 }
+      if (fromBus[i] >= 0 && amps < 0) { inflow[fromBus[i]] -= amps; fed[fromBus[i]] = 1 }
+    }
+    for (let k = 0; k < parts.length; k++) if (fed[k]) note(k, inflow[k], scenario)
+  })
+  const result = new Map<string, { currentA: number; scenarioId: string }>()
+  parts.forEach((p, k) => { if (worstScenario[k] >= 0) result.set(p.id, { currentA: worstA[k], scenarioId: solves[worstScenario[k]].scenario.id }) })
   return result
 }
 

@@ -44,6 +44,9 @@ export interface DeviceTopology {
 export interface ProtectionTopology {
   conductors: Map<string, ConductorProtection>
   devices: Map<string, DeviceTopology>
+  /** The same records by position: design.conductors order, and the order of the devices given. */
+  conductorList: ConductorProtection[]
+  deviceList: DeviceTopology[]
 }
 
 interface Graph {
@@ -105,6 +108,7 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
   const fromArray = walk(graph, n, edgeLen, sheathed, arrays.map((p) => nodeOf(p.id, 'pos')), arrays.map((p) => p.id))
 
   const conductors = new Map<string, ConductorProtection>()
+  const conductorList: ConductorProtection[] = new Array(design.conductors.length)
   for (let i = 0; i < design.conductors.length; i++) {
     const c = design.conductors[i]
     const ends = conductorEnds[i]
@@ -117,6 +121,7 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
       runSheathed: false, downstreamDeviceId: null, downstreamRunM: null, sourcePartId: null,
     }
     conductors.set(c.id, record)
+    conductorList[i] = record
     if (!w) continue
     const u = w.dist[ends.a] <= w.dist[ends.b] ? ends.a : ends.b
     const v = u === ends.a ? ends.b : ends.a
@@ -142,15 +147,20 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
   }
 
   const deviceTopology = new Map<string, DeviceTopology>()
+  const deviceList: DeviceTopology[] = new Array(devices.length)
+  const setDevice = (i: number, record: DeviceTopology) => {
+    deviceTopology.set(record.deviceId, record)
+    deviceList[i] = record
+  }
   devices.forEach((d, i) => {
     const line = nodeOf(d.partId, d.lineTerminal)
     const w = line !== undefined && fromBattery.reached(line) ? fromBattery : line !== undefined && fromArray.reached(line) ? fromArray : null
     if (!w || line === undefined) {
-      deviceTopology.set(d.id, { deviceId: d.id, side: 'none', distanceFromSourceM: null, upstreamDeviceId: null, sourcePartId: null })
+      setDevice(i, { deviceId: d.id, side: 'none', distanceFromSourceM: null, upstreamDeviceId: null, sourcePartId: null })
       return
     }
     const up = w.device[line]
-    deviceTopology.set(d.id, {
+    setDevice(i, {
       deviceId: d.id,
       side: w === fromBattery ? 'battery' : 'pv',
       distanceFromSourceM: up >= 0 ? null : (w.firstDeviceRunM[i] ?? w.dist[line]),
@@ -158,7 +168,7 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
       sourcePartId: w.sourceId(line),
     })
   })
-  return { conductors, devices: deviceTopology }
+  return { conductors, devices: deviceTopology, conductorList, deviceList }
 }
 
 function buildGraph(n: number, a: number[], b: number[], conductor: number[], device: number[]): Graph {

@@ -6,6 +6,7 @@ import { BRANCH_DISTANCE_LIMITS, maxDeviceRating } from './ocpdLimit'
 import type { ConductorStats, PvGroup } from '../rules/types'
 import type { ScenarioSolve } from './solveScenario'
 import { conductorOhm, conductorTemperatureC } from './conductorFigures'
+import type { PassiveCircuit } from './passiveCircuit'
 import { finite } from './finite'
 
 type AmpacityFigure = { result: AmpacityResult | null; source: string }
@@ -36,10 +37,17 @@ function ampacityUncached(c: Conductor, design: Design, circuitVoltageV: number)
   }
 }
 
+/** The conductor's resistance: the circuit's resistor when it has one, else from the tables (0 when they refuse it). */
+function conductorResistanceOhm(c: Conductor, design: Design, passive: PassiveCircuit, i: number): number {
+  const e = passive.conductorElementAt[i]
+  const el = e >= 0 ? passive.elements[e] : undefined
+  return el?.kind === 'resistor' ? el.resistanceOhm : (conductorOhm(c, design.settings) ?? 0)
+}
+
 /** Worst case per conductor over the solved scenarios, with ampacity, protection and PV role. */
 export function conductorStats(
-  design: Design, solves: ScenarioSolve[], topology: ProtectionTopology, farEndA: Map<string, number>, pvGroups: PvGroup[],
-  devices: ProtectiveDevice[],
+  design: Design, solves: ScenarioSolve[], topology: ProtectionTopology, farEndA: Float64Array, pvGroups: PvGroup[],
+  devices: ProtectiveDevice[], passive: PassiveCircuit,
 ): ConductorStats[] {
   const deviceById = new Map(devices.map((d) => [d.id, d]))
   const nominalV = design.settings.nominalVoltageV
@@ -62,7 +70,7 @@ export function conductorStats(
       if (!s.scenario.motorStart && amps > steadyCurrentA) { steadyCurrentA = amps; steadyScenarioId = s.scenario.id }
       dropPercentMax = Math.max(dropPercentMax, s.conductorDropPercent[i])
     }
-    const tapped = topology.conductors.get(c.id)!
+    const tapped = topology.conductorList[i]
     const pv = pvRole(c, tapped.side === 'pv' ? tapped.sourcePartId : null, arrayById, groupOfArray, controllerGroup)
     const circuitVoltageV = pv ? Math.max(nominalV, ...pv.arrays.map((a) => a.params.moduleVocV * a.params.modulesPerString)) : nominalV
     const { result, source } = ampacityOf(c, design, circuitVoltageV, ampacityMemo)
@@ -70,8 +78,8 @@ export function conductorStats(
     return {
       conductor: c, maxCurrentA: finite(maxCurrentA), maxScenarioId, steadyCurrentA: finite(steadyCurrentA), steadyScenarioId, ampacity: result,
       ampacityA: result?.ampacityA ?? null, ampacitySource: source, ambientC: conductorTemperatureC(c, design.settings),
-      resistanceOhm: conductorOhm(c, design.settings) ?? 0, dropPercentMax: finite(dropPercentMax), protection,
-      faultFarEndA: pv ? finite(pv.arrays.reduce((s, a) => s + a.params.moduleIscA * a.params.strings, 0)) : (farEndA.get(c.id) ?? 0),
+      resistanceOhm: conductorResistanceOhm(c, design, passive, i), dropPercentMax: finite(dropPercentMax), protection,
+      faultFarEndA: pv ? finite(pv.arrays.reduce((s, a) => s + a.params.moduleIscA * a.params.strings, 0)) : farEndA[i],
       pv,
     }
   })

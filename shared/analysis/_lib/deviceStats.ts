@@ -28,7 +28,7 @@ export function deviceChainOfPart(partId: string, design: Design, topology: Prot
 /** Worst case per device over the solved scenarios, fault current and the highest voltage it sees. */
 export function deviceStats(
   design: Design, devices: ProtectiveDevice[], solves: ScenarioSolve[], topology: ProtectionTopology,
-  deviceFaultA: Map<string, number>, pvGroups: PvGroup[], conductorsAt: Map<string, Design['conductors']>,
+  deviceFaultA: Float64Array, pvGroups: PvGroup[], conductorsAt: Map<string, Design['conductors']>,
   conductors: ConductorStats[],
 ): DeviceStats[] {
   // Currents of intermittent loads (and everything during a motor start) do not count as continuous.
@@ -74,12 +74,12 @@ export function deviceStats(
       const continuous = Math.max(0, amps - intermittent)
       if (continuous > continuousA) { continuousA = continuous; continuousScenarioId = s.scenario.id }
     })
-    const topo = topology.devices.get(device.id) ?? { deviceId: device.id, side: 'none' as const, distanceFromSourceM: null, upstreamDeviceId: null, sourcePartId: null }
+    const topo = topology.deviceList[index] ?? { deviceId: device.id, side: 'none' as const, distanceFromSourceM: null, upstreamDeviceId: null, sourcePartId: null }
     const pvVoc = topo.side === 'pv' ? groupVoc(topo.sourcePartId) : 0
     const onPv = pvVoc > 0
     return {
       device, maxCurrentA, maxScenarioId, continuousA, continuousScenarioId,
-      faultCurrentA: onPv ? pvIscOfGroup(pvGroups, topo.sourcePartId) : (deviceFaultA.get(device.id) ?? 0),
+      faultCurrentA: onPv ? pvIscOfGroup(pvGroups, topo.sourcePartId) : deviceFaultA[index],
       topology: topo, protectsConductorIds: protects.get(device.id) ?? [],
       highestVoltageV: onPv ? pvVoc : battery.voltageV,
       highestVoltageBasis: onPv

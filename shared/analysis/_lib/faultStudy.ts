@@ -6,11 +6,11 @@ import { finite } from './finite'
 import { nodeAt } from './terminalNodes'
 
 export interface FaultStudy {
-  /** Bolted fault at the device's load terminal to the negative of its bank, A. */
-  deviceFaultA: Map<string, number>
-  /** Bolted fault at the far end of each positive conductor, across the part it feeds (its negative
-   * terminal when it has one, else the bank's negative), A. */
-  conductorFarEndA: Map<string, number>
+  /** Per device (prepared.devices order): bolted fault at its load terminal to the negative of its bank, A. */
+  deviceFaultA: Float64Array
+  /** Per conductor (design order): bolted fault at the far end of a positive conductor, across the part
+   * it feeds (its negative terminal when it has one, else the bank's negative), A; 0 when none. */
+  conductorFarEndA: Float64Array
 }
 
 /**
@@ -27,36 +27,36 @@ export function faultStudy(design: Design, prepared: PreparedDesign, topology: P
 
   // Faults in the order of their owners: the devices, then the conductors (results come back in that order).
   const faults: FaultLocation[] = []
-  const faultDevice: string[] = []
-  for (const d of prepared.devices) {
-    const t = topology.devices.get(d.id)
+  const faultDevice: number[] = []
+  prepared.devices.forEach((d, k) => {
+    const t = topology.deviceList[k]
     const a = nodeAt(nodes, d.partId, d.loadTerminal)
     const b = t?.side === 'battery' && t.sourcePartId ? bankNeg.get(t.sourcePartId) : undefined
     if (a !== undefined && b !== undefined) {
       faults.push({ id: `d:${d.id}`, a, b })
-      faultDevice.push(d.id)
+      faultDevice.push(k)
     }
-  }
+  })
   const deviceFaults = faults.length
-  const faultConductor: string[] = []
+  const faultConductor: number[] = []
   design.conductors.forEach((c, k) => {
-    const t = topology.conductors.get(c.id)
+    const t = topology.conductorList[k]
     if (!t || t.side !== 'battery' || !t.sourcePartId) return
     const far = nodes.conductorFrom[k] === t.downstreamNode ? c.from : nodes.conductorTo[k] === t.downstreamNode ? c.to : undefined
     const negTerminal = far ? nodes.terminalsOf.get(far.partId)?.find((term) => term.polarity === 'negative') : undefined
     const b = (negTerminal && far ? nodeAt(nodes, far.partId, negTerminal.id) : undefined) ?? bankNeg.get(t.sourcePartId)
     if (b !== undefined) {
       faults.push({ id: `c:${c.id}`, a: t.downstreamNode, b })
-      faultConductor.push(c.id)
+      faultConductor.push(k)
     }
   })
 
-  const deviceFaultA = new Map<string, number>()
-  const conductorFarEndA = new Map<string, number>()
+  const deviceFaultA = new Float64Array(prepared.devices.length)
+  const conductorFarEndA = new Float64Array(design.conductors.length)
   faultCurrents(compiled.circuit, faults, { cache: prepared.solverCache }).forEach((f, k) => {
     const amps = finite(f.currentA)
-    if (k < deviceFaults) deviceFaultA.set(faultDevice[k], amps)
-    else conductorFarEndA.set(faultConductor[k - deviceFaults], amps)
+    if (k < deviceFaults) deviceFaultA[faultDevice[k]] = amps
+    else conductorFarEndA[faultConductor[k - deviceFaults]] = amps
   })
   return { deviceFaultA, conductorFarEndA }
 }
