@@ -6,6 +6,10 @@ const revisionsPath = (projectId: string) => `/projects/${encodeURIComponent(pro
 
 export const listRevisions = (projectId: string) => http.get<Revision[]>(revisionsPath(projectId))
 
+/** One revision with the design as it was recorded (read-only). */
+export const getRevision = (projectId: string, revisionId: string) =>
+  http.get<{ revision: Revision; design: unknown }>(`${revisionsPath(projectId)}/${encodeURIComponent(revisionId)}`)
+
 export const nameRevision = (projectId: string, name: string) => http.post<Revision>(revisionsPath(projectId), { name })
 
 /** Restoring records a new revision; the history is kept. */

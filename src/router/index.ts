@@ -12,6 +12,7 @@ const routes: RouteRecordRaw[] = [
   { path: '/projects', name: 'projects', component: () => import('@/views/projects/ProjectsView.vue'), meta: { action: 'project.read', title: 'Projects' } },
   { path: '/projects/:id', name: 'project', component: () => import('@/views/projects/ProjectView.vue'), meta: { action: 'project.read', title: 'Project' } },
   { path: '/projects/:id/design', name: 'design', component: () => import('@/views/editor/DesignEditorView.vue'), meta: { action: 'project.read', layout: 'bare', title: 'Design' } },
+  { path: '/projects/:id/revisions/:revisionId', name: 'revision', component: () => import('@/views/revisions/RevisionView.vue'), meta: { action: 'project.read', layout: 'bare', title: 'Revision' } },
   { path: '/members', name: 'members', component: () => import('@/views/members/MembersView.vue'), meta: { action: 'member.read', title: 'Members' } },
   { path: '/devices', name: 'devices', component: () => import('@/views/devices/DeviceLibraryView.vue'), meta: { action: 'project.readAll', title: 'Device library' } },
   { path: '/outbox', name: 'outbox', component: () => import('@/views/outbox/OutboxView.vue'), meta: { action: 'outbox.read', title: 'Mail outbox' } },
