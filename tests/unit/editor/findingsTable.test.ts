@@ -34,10 +34,10 @@ afterEach(() => {
   document.body.innerHTML = ''
 })
 
-function mountTable(canApply = true) {
+function mountTable(canApply = true, selectedIds: string[] = []) {
   const Host = defineComponent({
     setup: () => () =>
-      h(VApp, null, { default: () => h(FindingsTable, { findings, nameOf: (id: string) => names[id] ?? id, canApply }) }),
+      h(VApp, null, { default: () => h(FindingsTable, { findings, nameOf: (id: string) => names[id] ?? id, canApply, selectedIds }) }),
   })
   const wrapper = mount(Host, { attachTo: document.body, global: { plugins: [createAmpwrightVuetify()] } })
   unmount = () => wrapper.unmount()
@@ -71,6 +71,13 @@ describe('findings table', () => {
     await header.trigger('click')
     await flushPromises()
     expect(titles(wrapper)).toEqual(['Voltage drop above 3 %', 'Terminal not connected', 'Device will open under normal load'])
+  })
+
+  it('marks the findings it is told are selected, and only those', async () => {
+    const { wrapper } = mountTable(true, ['drop:w3'])
+    await flushPromises()
+    const marked = wrapper.findAll('tbody tr.schedule-table__row--selected').map((row) => row.attributes('data-row-id'))
+    expect(marked).toEqual(['drop:w3'])
   })
 
   it('asks to select the parts of a clicked finding', async () => {
