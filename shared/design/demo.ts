@@ -1,4 +1,4 @@
-import { makeConductor, makePart, type ConductorOptions } from './builder'
+import { mainDistribution, mainDistributionWires, makeConductor, makePart, wirePair, type ConductorOptions, type WireMaker } from './builder'
 import type { ParamsOf } from './catalogue'
 import { newId } from './ids'
 import type { Conductor, Design, DesignSettings, Part, PartType, Scenario } from './schema'
@@ -42,6 +42,14 @@ const wire = (id: string, label: string, from: string, to: string, sizeId: Condu
   colour: 'red' | 'black', options: ConductorOptions = {}) =>
   makeConductor(id, label, from, to, sizeId, lengthM, { material: 'tinned-copper', colour, ...options })
 
+/** `wire` with the colour read from the run: a negative run ("−" in its label, or ending at a negative terminal) is black. */
+const byPolarity: WireMaker = (id, label, from, to, sizeId, lengthM, options) =>
+  wire(id, label, from, to, sizeId, lengthM, label.includes('−') || /neg/.test(to) ? 'black' : 'red', options)
+/** Way `n` of the fuse panel out to a load and back: red out, black back. */
+const panelWay = (n: number, id: string, name: string, partId: string, sizeId: Conductor['sizeId'], lengthM: number, options?: ConductorOptions) =>
+  wirePair(byPolarity, { id, name, partId, feed: `panel.out${n}`, ret: 'panel.neg', sizeId, lengthM, options })
+const BUNDLED_4: ConductorOptions = { bundledCount: 4, installation: 'bundled' }
+
 /** Bolt-down strip fuses: ~6 kA at 32 V DC, the figure in shared/protection/families.ts (recalled, unverified). */
 const STRIP_FUSE_AIC_A = 6000
 
@@ -73,12 +81,7 @@ export function createDemoDesign(): Design {
     part('dc-dc-charger', 'dcdc', 'DC-DC charger 24/24 V 30 A', 400, 640, { outputCurrentA: 30, efficiency: 0.92, inputMinV: 26 }),
     part('battery', 'house-bank', 'House bank LFP 2 × 12.8 V 200 Ah', 560, 400, { chemistry: 'lfp', nominalVoltageV: 12.8,
       capacityAh: 200, internalResistanceOhm: 0.003, seriesCount: 2, parallelCount: 1 }),
-    part('fuse', 'main-fuse', 'Main fuse Class T 300 A', 720, 260, { family: 'class-t', ratingA: 300, dcVoltageRatingV: 160,
-      interruptingRatingA: 20000 }),
-    part('battery-switch', 'main-switch', 'Battery switch', 860, 260, { ratingA: 300 }),
-    part('shunt', 'shunt', 'Shunt 500 A / 50 mV', 720, 560, { ratingA: 500, resistanceOhm: 0.0001 }),
-    part('bus-bar', 'pos-bus', 'Positive bus', 1000, 260, { ratingA: 300, polarity: 'positive', studs: 6 }),
-    part('bus-bar', 'neg-bus', 'Negative bus', 1000, 560, { ratingA: 300, polarity: 'negative', studs: 6 }),
+    ...mainDistribution(part, { x: 720, y: 260, negY: 560, mainFuseA: 300, switchLabel: 'Battery switch', busRatingA: 300, busStuds: 6 }),
     part('fuse', 'solar-fuse', 'Solar charge fuse 60 A', 860, 100, { family: 'strip-bolt-down', ratingA: 60, dcVoltageRatingV: 32,
       interruptingRatingA: STRIP_FUSE_AIC_A }),
     part('fuse', 'dcdc-out-fuse', 'DC-DC output fuse 40 A', 860, 420, { family: 'strip-bolt-down', ratingA: 40,
@@ -115,30 +118,22 @@ export function createDemoDesign(): Design {
     wire('dcdc-out-pos', 'DC-DC output to fuse', 'dcdc.out-pos', 'dcdc-out-fuse.load', 'awg-8', 1.2, 'red'),
     wire('dcdc-out-feed', 'Bus to DC-DC fuse', 'pos-bus.e', 'dcdc-out-fuse.line', 'awg-2/0', 0.1, 'red'),
     wire('dcdc-out-neg', 'DC-DC output −', 'dcdc.out-neg', 'neg-bus.e', 'awg-8', 1.4, 'black'),
-    wire('bank-pos', 'Bank + to main fuse', 'house-bank.pos', 'main-fuse.line', 'awg-2/0', 0.2, 'red', { sheathed: true }),
-    wire('fuse-switch', 'Main fuse to switch', 'main-fuse.load', 'main-switch.a', 'awg-2/0', 0.4, 'red', { sheathed: true }),
-    wire('switch-bus', 'Switch to positive bus', 'main-switch.b', 'pos-bus.a', 'awg-2/0', 0.5, 'red', { sheathed: true }),
-    wire('bank-neg', 'Bank − to shunt', 'house-bank.neg', 'shunt.battery', 'awg-2/0', 0.3, 'black'),
-    wire('shunt-bus', 'Shunt to negative bus', 'shunt.system', 'neg-bus.a', 'awg-2/0', 0.4, 'black'),
+    ...mainDistributionWires(byPolarity, { bankId: 'house-bank', bankName: 'Bank', sizeId: 'awg-2/0', lengthsM: [0.2, 0.4, 0.5, 0.3, 0.4],
+      shuntLabel: 'Shunt to negative bus' }),
     wire('inverter-feed', 'Bus to inverter fuse', 'pos-bus.b', 'inverter-fuse.line', 'awg-2/0', 0.1, 'red'),
     wire('inverter-pos', 'Inverter +', 'inverter-fuse.load', 'inverter.pos', 'awg-2', 1.5, 'red'),
     wire('inverter-neg', 'Inverter −', 'inverter.neg', 'neg-bus.b', 'awg-2', 1.7, 'black'),
     wire('panel-feed', 'Bus to panel fuse', 'pos-bus.c', 'panel-fuse.line', 'awg-2/0', 0.1, 'red'),
     wire('panel-pos', 'Panel feed +', 'panel-fuse.load', 'panel.in-pos', 'awg-6', 1.2, 'red'),
     wire('panel-neg', 'Panel feed −', 'panel.in-neg', 'neg-bus.c', 'awg-6', 1.4, 'black'),
-    wire('fridge-pos', 'Fridge +', 'panel.out1', 'fridge.pos', 'awg-12', 3, 'red', { bundledCount: 4, installation: 'bundled' }),
-    wire('fridge-neg', 'Fridge −', 'fridge.neg', 'panel.neg', 'awg-12', 3, 'black', { bundledCount: 4, installation: 'bundled' }),
-    wire('lights-pos', 'Lights +', 'panel.out2', 'lights.pos', 'awg-14', 4, 'red', { bundledCount: 4, installation: 'bundled' }),
-    wire('lights-neg', 'Lights −', 'lights.neg', 'panel.neg', 'awg-14', 4, 'black', { bundledCount: 4, installation: 'bundled' }),
-    wire('pump-pos', 'Pump +', 'panel.out3', 'water-pump.pos', 'awg-14', 2.5, 'red'),
-    wire('pump-neg', 'Pump −', 'water-pump.neg', 'panel.neg', 'awg-14', 2.5, 'black'),
-    wire('heater-pos', 'Heater +', 'panel.out4', 'heater.pos', 'awg-14', 2, 'red'),
-    wire('heater-neg', 'Heater −', 'heater.neg', 'panel.neg', 'awg-14', 2, 'black'),
+    ...panelWay(1, 'fridge', 'Fridge', 'fridge', 'awg-12', 3, BUNDLED_4),
+    ...panelWay(2, 'lights', 'Lights', 'lights', 'awg-14', 4, BUNDLED_4),
+    ...panelWay(3, 'pump', 'Pump', 'water-pump', 'awg-14', 2.5),
+    ...panelWay(4, 'heater', 'Heater', 'heater', 'awg-14', 2),
     // Finding 2: 7 m of 16 AWG each way through the cab wall to the radio.
     wire('radio-pos', 'Radio + (to cab)', 'panel.out5', 'radio.pos', 'awg-16', 7, 'red', { sheathed: true }),
     wire('radio-neg', 'Radio − (from cab)', 'radio.neg', 'panel.neg', 'awg-16', 7, 'black', { sheathed: true }),
-    wire('usb-pos', 'USB +', 'panel.out6', 'usb.pos', 'awg-16', 1.5, 'red'),
-    wire('usb-neg', 'USB −', 'usb.neg', 'panel.neg', 'awg-16', 1.5, 'black'),
+    ...panelWay(6, 'usb', 'USB', 'usb', 'awg-16', 1.5),
   ]
 
   const scenarios: Scenario[] = [

@@ -1,4 +1,4 @@
-import { makeConductor, makePart, type ConductorOptions } from '../../../shared/design/builder'
+import { mainDistribution, mainDistributionWires, makeConductor, makePart, wirePair, type ConductorOptions } from '../../../shared/design/builder'
 import type { ParamsOf } from '../../../shared/design/catalogue'
 import type { Conductor, Design, DesignSettings, PartType } from '../../../shared/design/schema'
 
@@ -12,6 +12,9 @@ const part = <T extends PartType>(type: T, id: string, label: string, x: number,
   makePart(SETTINGS, type, id, label, { x, y }, params)
 const wire = (id: string, label: string, from: string, to: string, sizeId: Conductor['sizeId'], lengthM: number, options: ConductorOptions = {}) =>
   makeConductor(id, label, from, to, sizeId, lengthM, { material: 'tinned-copper', colour: label.includes('−') ? 'yellow' : 'red', ...options })
+/** Way `n` of the distribution panel out to a load and back to the panel's negative. */
+const panelWay = (n: number, id: string, name: string, partId: string, sizeId: Conductor['sizeId'], lengthM: number, options?: ConductorOptions) =>
+  wirePair(wire, { id, name, partId, feed: `panel.out${n}`, ret: 'panel.neg', sizeId, lengthM, options })
 const strip = (ratingA: number) => ({ family: 'strip-bolt-down' as const, ratingA, dcVoltageRatingV: 32, interruptingRatingA: 6000 }) // ~6 kA at 32 V DC (shared/protection/families.ts, recalled)
 const on = { on: true, level: 1 }
 
@@ -27,12 +30,7 @@ export function sailboat24V(): Design {
       part('mains-charger', 'shore-charger', 'Shore-power charger 25 A', 320, 700, { outputCurrentA: 25, outputVoltageV: 28.4 }),
       part('battery', 'house-bank', 'House bank LFP 25.6 V 200 Ah', 520, 420, { chemistry: 'lfp', nominalVoltageV: 25.6,
         capacityAh: 200, internalResistanceOhm: 0.005, seriesCount: 1, parallelCount: 1 }),
-      part('fuse', 'main-fuse', 'Main fuse Class T 250 A', 680, 280, { family: 'class-t', ratingA: 250, dcVoltageRatingV: 160,
-        interruptingRatingA: 20000 }),
-      part('battery-switch', 'main-switch', 'House battery switch', 820, 280, { ratingA: 300 }),
-      part('shunt', 'shunt', 'Shunt 500 A / 50 mV', 680, 560, { ratingA: 500, resistanceOhm: 0.0001 }),
-      part('bus-bar', 'pos-bus', 'Positive bus', 960, 280, { ratingA: 300, polarity: 'positive', studs: 6 }),
-      part('bus-bar', 'neg-bus', 'Negative bus', 960, 560, { ratingA: 300, polarity: 'negative', studs: 6 }),
+      ...mainDistribution(part, { x: 680, y: 280, negY: 560, mainFuseA: 250, switchLabel: 'House battery switch', busRatingA: 300, busStuds: 6 }),
       part('fuse', 'solar-fuse', 'Solar charge fuse 30 A', 820, 120, strip(30)),
       part('fuse', 'charger-fuse', 'Charger fuse 40 A', 820, 700, strip(40)),
       part('breaker', 'windlass-breaker', 'Windlass breaker 150 A', 1120, 120, { family: 'breaker-magnetic-hydraulic', ratingA: 150,
@@ -60,29 +58,19 @@ export function sailboat24V(): Design {
       wire('charger-feed', 'Bus to charger fuse', 'pos-bus.e', 'charger-fuse.line', 'awg-2/0', 0.1),
       wire('charger-pos', 'Charger +', 'charger-fuse.load', 'shore-charger.bat-pos', 'awg-8', 2),
       wire('charger-neg', 'Charger −', 'shore-charger.bat-neg', 'neg-bus.e', 'awg-8', 2.2),
-      wire('bank-pos', 'Bank + to main fuse', 'house-bank.pos', 'main-fuse.line', 'awg-2/0', 0.15, { sheathed: true }),
-      wire('fuse-switch', 'Main fuse to switch', 'main-fuse.load', 'main-switch.a', 'awg-2/0', 0.5, { sheathed: true }),
-      wire('switch-bus', 'Switch to positive bus', 'main-switch.b', 'pos-bus.a', 'awg-2/0', 0.6, { sheathed: true }),
-      wire('bank-neg', 'Bank − to shunt', 'house-bank.neg', 'shunt.battery', 'awg-2/0', 0.3),
-      wire('shunt-bus', 'Shunt − to negative bus', 'shunt.system', 'neg-bus.a', 'awg-2/0', 0.5),
+      ...mainDistributionWires(wire, { bankId: 'house-bank', bankName: 'Bank', sizeId: 'awg-2/0', lengthsM: [0.15, 0.5, 0.6, 0.3, 0.5] }),
       wire('windlass-feed', 'Bus to windlass breaker', 'pos-bus.b', 'windlass-breaker.line', 'awg-2/0', 0.1),
       wire('windlass-pos', 'Windlass + (to bow)', 'windlass-breaker.load', 'windlass.pos', 'awg-6', 9, { sheathed: true }),
       wire('windlass-neg', 'Windlass − (from bow)', 'windlass.neg', 'neg-bus.b', 'awg-6', 9.3, { sheathed: true }),
       wire('panel-feed', 'Bus to panel fuse', 'pos-bus.d', 'panel-fuse.line', 'awg-2/0', 0.1),
       wire('panel-pos', 'Panel feed +', 'panel-fuse.load', 'panel.in-pos', 'awg-6', 1.5),
       wire('panel-neg', 'Panel feed −', 'panel.in-neg', 'neg-bus.d', 'awg-6', 1.7),
-      wire('nav-pos', 'Nav lights +', 'panel.out1', 'nav-lights.pos', 'awg-16', 6, { sheathed: true }),
-      wire('nav-neg', 'Nav lights −', 'nav-lights.neg', 'panel.neg', 'awg-16', 6, { sheathed: true }),
-      wire('bilge-pos', 'Bilge pump +', 'panel.out2', 'bilge-pump.pos', 'awg-16', 8),
-      wire('bilge-neg', 'Bilge pump −', 'bilge-pump.neg', 'panel.neg', 'awg-16', 8),
-      wire('vhf-pos', 'VHF +', 'panel.out3', 'vhf.pos', 'awg-16', 3),
-      wire('vhf-neg', 'VHF −', 'vhf.neg', 'panel.neg', 'awg-16', 3),
-      wire('autopilot-pos', 'Autopilot +', 'panel.out4', 'autopilot.pos', 'awg-12', 6),
-      wire('autopilot-neg', 'Autopilot −', 'autopilot.neg', 'panel.neg', 'awg-12', 6),
-      wire('fridge-pos', 'Fridge +', 'panel.out5', 'fridge.pos', 'awg-14', 3),
-      wire('fridge-neg', 'Fridge −', 'fridge.neg', 'panel.neg', 'awg-14', 3),
-      wire('lights-pos', 'Cabin lights +', 'panel.out6', 'cabin-lights.pos', 'awg-16', 4),
-      wire('lights-neg', 'Cabin lights −', 'cabin-lights.neg', 'panel.neg', 'awg-16', 4),
+      ...panelWay(1, 'nav', 'Nav lights', 'nav-lights', 'awg-16', 6, { sheathed: true }),
+      ...panelWay(2, 'bilge', 'Bilge pump', 'bilge-pump', 'awg-16', 8),
+      ...panelWay(3, 'vhf', 'VHF', 'vhf', 'awg-16', 3),
+      ...panelWay(4, 'autopilot', 'Autopilot', 'autopilot', 'awg-12', 6),
+      ...panelWay(5, 'fridge', 'Fridge', 'fridge', 'awg-14', 3),
+      ...panelWay(6, 'lights', 'Cabin lights', 'cabin-lights', 'awg-16', 4),
     ],
     scenarios: [
       { id: 'anchor-night', name: 'At anchor, night', sunOn: false, chargerOn: false,

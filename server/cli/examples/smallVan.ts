@@ -1,4 +1,4 @@
-import { makeConductor, makePart, type ConductorOptions } from '../../../shared/design/builder'
+import { mainDistribution, mainDistributionWires, makeConductor, makePart, wirePair, type ConductorOptions } from '../../../shared/design/builder'
 import type { ParamsOf } from '../../../shared/design/catalogue'
 import type { Conductor, Design, DesignSettings, PartType } from '../../../shared/design/schema'
 
@@ -14,6 +14,9 @@ const part = <T extends PartType>(type: T, id: string, label: string, x: number,
   makePart(SETTINGS, type, id, label, { x, y }, params)
 const wire = (id: string, label: string, from: string, to: string, sizeId: Conductor['sizeId'], lengthM: number, options: ConductorOptions = {}) =>
   makeConductor(id, label, from, to, sizeId, lengthM, { colour: label.includes('−') ? 'black' : 'red', ...options })
+/** Way `n` of the fuse panel out to a load and back to the panel's negative. */
+const panelWay = (n: number, id: string, name: string, partId: string, sizeId: Conductor['sizeId'], lengthM: number) =>
+  wirePair(wire, { id, name, partId, feed: `panel.out${n}`, ret: 'panel.neg', sizeId, lengthM })
 const strip = (ratingA: number) => ({ family: 'strip-bolt-down' as const, ratingA, dcVoltageRatingV: 32, interruptingRatingA: 6000 }) // ~6 kA at 32 V DC (shared/protection/families.ts, recalled)
 
 export function smallVan12V(): Design {
@@ -27,12 +30,7 @@ export function smallVan12V(): Design {
         outputCurrentA: 30, efficiency: 0.97, mppt: true }),
       part('battery', 'house-bank', 'House battery LFP 12.8 V 100 Ah', 500, 420, { chemistry: 'lfp', nominalVoltageV: 12.8,
         capacityAh: 100, internalResistanceOhm: 0.006, seriesCount: 1, parallelCount: 1 }),
-      part('fuse', 'main-fuse', 'Main fuse Class T 250 A', 680, 280, { family: 'class-t', ratingA: 250, dcVoltageRatingV: 160,
-        interruptingRatingA: 20000 }),
-      part('battery-switch', 'main-switch', 'Battery switch', 820, 280, { ratingA: 300 }),
-      part('shunt', 'shunt', 'Shunt 500 A / 50 mV', 680, 560, { ratingA: 500, resistanceOhm: 0.0001 }),
-      part('bus-bar', 'pos-bus', 'Positive bus', 960, 280, { ratingA: 250, polarity: 'positive', studs: 4 }),
-      part('bus-bar', 'neg-bus', 'Negative bus', 960, 560, { ratingA: 250, polarity: 'negative', studs: 4 }),
+      ...mainDistribution(part, { x: 680, y: 280, negY: 560, mainFuseA: 250, switchLabel: 'Battery switch', busRatingA: 250, busStuds: 4 }),
       part('fuse', 'solar-fuse', 'Solar charge fuse 40 A', 820, 120, strip(40)),
       part('fuse', 'inverter-fuse', 'Inverter fuse 50 A', 1120, 120, strip(50)),
       part('inverter', 'inverter', 'Inverter 300 W', 1300, 80, { continuousW: 300, surgeW: 600, efficiency: 0.88 }),
@@ -52,27 +50,18 @@ export function smallVan12V(): Design {
       wire('solar-feed', 'Bus to solar fuse', 'pos-bus.c', 'solar-fuse.line', 'awg-1/0', 0.1),
       wire('mppt-out-pos', 'Controller + from solar fuse', 'solar-fuse.load', 'mppt.bat-pos', 'awg-8', 1),
       wire('mppt-out-neg', 'Controller − to bus', 'mppt.bat-neg', 'neg-bus.c', 'awg-8', 1.2),
-      wire('bank-pos', 'Battery + to main fuse', 'house-bank.pos', 'main-fuse.line', 'awg-1/0', 0.2, { sheathed: true }),
-      wire('fuse-switch', 'Main fuse to switch', 'main-fuse.load', 'main-switch.a', 'awg-1/0', 0.3, { sheathed: true }),
-      wire('switch-bus', 'Switch to positive bus', 'main-switch.b', 'pos-bus.a', 'awg-1/0', 0.3, { sheathed: true }),
-      wire('bank-neg', 'Battery − to shunt', 'house-bank.neg', 'shunt.battery', 'awg-1/0', 0.3),
-      wire('shunt-bus', 'Shunt − to negative bus', 'shunt.system', 'neg-bus.a', 'awg-1/0', 0.3),
+      ...mainDistributionWires(wire, { bankId: 'house-bank', bankName: 'Battery', sizeId: 'awg-1/0', lengthsM: [0.2, 0.3, 0.3, 0.3, 0.3] }),
       wire('inverter-feed', 'Bus to inverter fuse', 'pos-bus.b', 'inverter-fuse.line', 'awg-1/0', 0.1),
       wire('inverter-pos', 'Inverter +', 'inverter-fuse.load', 'inverter.pos', 'awg-6', 1),
       wire('inverter-neg', 'Inverter −', 'inverter.neg', 'neg-bus.b', 'awg-6', 1.2),
       wire('panel-feed', 'Bus to panel fuse', 'pos-bus.d', 'panel-fuse.line', 'awg-1/0', 0.1),
       wire('panel-pos', 'Panel feed +', 'panel-fuse.load', 'panel.in-pos', 'awg-8', 1.5),
       wire('panel-neg', 'Panel feed −', 'panel.in-neg', 'neg-bus.d', 'awg-8', 1.5),
-      wire('fridge-pos', 'Fridge +', 'panel.out1', 'fridge.pos', 'awg-12', 3),
-      wire('fridge-neg', 'Fridge −', 'fridge.neg', 'panel.neg', 'awg-12', 3),
-      wire('lights-pos', 'Lights +', 'panel.out2', 'lights.pos', 'awg-16', 3),
-      wire('lights-neg', 'Lights −', 'lights.neg', 'panel.neg', 'awg-16', 3),
-      wire('pump-pos', 'Pump +', 'panel.out3', 'water-pump.pos', 'awg-14', 2),
-      wire('pump-neg', 'Pump −', 'water-pump.neg', 'panel.neg', 'awg-14', 2),
-      wire('fan-pos', 'Fan +', 'panel.out4', 'fan.pos', 'awg-16', 2),
-      wire('fan-neg', 'Fan −', 'fan.neg', 'panel.neg', 'awg-16', 2),
-      wire('usb-pos', 'USB +', 'panel.out5', 'usb.pos', 'awg-16', 1),
-      wire('usb-neg', 'USB −', 'usb.neg', 'panel.neg', 'awg-16', 1),
+      ...panelWay(1, 'fridge', 'Fridge', 'fridge', 'awg-12', 3),
+      ...panelWay(2, 'lights', 'Lights', 'lights', 'awg-16', 3),
+      ...panelWay(3, 'pump', 'Pump', 'water-pump', 'awg-14', 2),
+      ...panelWay(4, 'fan', 'Fan', 'fan', 'awg-16', 2),
+      ...panelWay(5, 'usb', 'USB', 'usb', 'awg-16', 1),
     ],
     scenarios: [
       { id: 'evening', name: 'Evening, all loads', sunOn: false, chargerOn: false,
