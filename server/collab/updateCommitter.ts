@@ -4,6 +4,7 @@
 // keep a slow commit from holding every design. The first update after a quiet spell goes at once.
 import type { Db } from '../db/client'
 import { appendUpdates, type AppendedDesign, type LoggedUpdate } from './designState.repository'
+import { LatencyHistogram } from './latencyHistogram'
 
 export interface CommitterOptions {
   /** Commits in flight at once (pool connections the log may hold). */
@@ -15,7 +16,8 @@ export interface CommitterOptions {
 export interface UpdateCommitter {
   /** Resolves once all of the design's updates are committed (all or none). */
   commit(projectId: string, updates: readonly LoggedUpdate[]): Promise<AppendedDesign>
-  readonly stats: { commits: number; rows: number }
+  /** `commitMs`: how long each statement took (round trip and WAL flush), apart from queueing. */
+  readonly stats: { commits: number; rows: number; commitMs: LatencyHistogram }
 }
 
 interface Submission {
@@ -27,7 +29,7 @@ interface Submission {
 
 export function createUpdateCommitter(db: Db, options: CommitterOptions): UpdateCommitter {
   const pending: Submission[] = []
-  const stats = { commits: 0, rows: 0 }
+  const stats = { commits: 0, rows: 0, commitMs: new LatencyHistogram() }
   let inFlight = 0
 
   function takeBatch(): Submission[] {
@@ -42,7 +44,9 @@ export function createUpdateCommitter(db: Db, options: CommitterOptions): Update
 
   async function write(batch: Submission[]): Promise<void> {
     try {
+      const startedAt = performance.now()
       const saved = await appendUpdates(db, batch)
+      stats.commitMs.record(performance.now() - startedAt)
       stats.commits++
       for (const s of batch) {
         stats.rows += s.updates.length

@@ -142,7 +142,11 @@ export async function run(): Promise<void> {
   )
   const commits = after.commits.commits - before.commits.commits
   const rows = after.commits.rows - before.commits.rows
-  console.log(`group commit         ${commits} commits for ${rows} updates (${(rows / Math.max(1, commits)).toFixed(1)} per commit)`)
+  const commitMs = after.commits.commitMs
+  console.log(
+    `group commit         ${commits} commits for ${rows} updates (${(rows / Math.max(1, commits)).toFixed(1)} per commit); ` +
+      `each statement p50 ${commitMs.p50Ms.toFixed(1)} ms p95 ${commitMs.p95Ms.toFixed(1)} ms max ${commitMs.maxMs.toFixed(1)} ms`,
+  )
   const clientCpuS = (clientCpu.user + clientCpu.system) / 1e6
   console.log(
     `bench clients        CPU ${clientCpuS.toFixed(1)} s (${((100 * clientCpuS) / runSeconds).toFixed(0)} % of one core), event-loop delay p50 ${(loopDelay.percentile(50) / 1e6).toFixed(1)} ms p99 ${(loopDelay.percentile(99) / 1e6).toFixed(1)} ms`,

@@ -12,7 +12,8 @@ export interface ChildUsage {
   maxRssKb: number
   /** Arrival → broadcast inside the server (queue wait, commit, apply). */
   updateLatency: { count: number; p50Ms: number; p95Ms: number; maxMs: number }
-  commits: { commits: number; rows: number }
+  /** Group commit: statements, rows, and each statement's own time. */
+  commits: { commits: number; rows: number; commitMs: { count: number; p50Ms: number; p95Ms: number; maxMs: number } }
 }
 
 export interface ChildServer {

@@ -32,6 +32,6 @@ process.on('message', (message: { type?: string }) => {
     cpuSystemUs: cpu.system,
     maxRssKb: process.resourceUsage().maxRSS,
     updateLatency: hub.latency.summary(),
-    commits: { ...hub.committer.stats },
+    commits: { commits: hub.committer.stats.commits, rows: hub.committer.stats.rows, commitMs: hub.committer.stats.commitMs.summary() },
   })
 })
