@@ -77,7 +77,6 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
   // The wiring, devices and banks are the same in every scenario: copy them, then add what runs.
   const elements: CircuitElement[] = base.elements.slice()
   const owners: ElementOwner[] = base.owners.slice()
-  const partElement = new Map(base.partElement)
   const partElementAt = base.partElementAt.slice()
   const problems: CompileProblem[] = base.problems.slice()
   const { conductorElement, deviceElement, conductorElementAt, deviceElementAt, batteryNegNodes, arraysOfController } = base
@@ -98,7 +97,6 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
   }
 
   const setOwn = (partId: string, e: number) => {
-    partElement.set(partId, e)
     const k = base.partIndex.get(partId)
     if (k !== undefined) partElementAt[k] = e
   }
@@ -164,7 +162,7 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
     }
   }
   for (const a of design.parts) {
-    if (a.type === 'pv-array' && scenario.sunOn && !partElement.has(a.id) && ![...arraysOfController.values()].some((list) => list.includes(a)))
+    if (a.type === 'pv-array' && scenario.sunOn && !(partElementAt[base.partIndex.get(a.id) ?? -1] >= 0) && ![...arraysOfController.values()].some((list) => list.includes(a)))
       problems.push({ kind: 'array-without-controller', message: `${a.label || a.id} is not wired to a charge controller's PV input`, partIds: [a.id], conductorIds: [] })
   }
 
@@ -188,10 +186,22 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
     setOwn(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: ns[2], neg: ns[3], powerW: -finite(outW), minVoltageV }, { kind: 'part', id: part.id, role: 'main' }))
   }
 
-  return {
+  const compiled: Omit<CompiledCircuit, 'partElement'> = {
     circuit: { nodeCount: nodes.nodeCount, nodeNames: nodes.nodeNames, elements },
-    nodes, owners, conductorElement, partElement, deviceElement, conductorElementAt, partElementAt, deviceElementAt, batteryNegNodes, problems,
+    nodes, owners, conductorElement, deviceElement, conductorElementAt, partElementAt, deviceElementAt, batteryNegNodes, problems,
   }
+  // The id-keyed view of partElementAt, built on first read (the analysis reads positions only).
+  let partElement: Map<string, number> | undefined
+  return Object.defineProperty(compiled, 'partElement', {
+    enumerable: true,
+    get: () => {
+      if (!partElement) {
+        partElement = new Map()
+        design.parts.forEach((part, k) => { if (partElementAt[k] >= 0) partElement!.set(part.id, partElementAt[k]) })
+      }
+      return partElement
+    },
+  }) as CompiledCircuit
 }
 
 export { pvArraysByController } from './_lib/passiveCircuit'

@@ -2,6 +2,8 @@ import type { Finding } from './types'
 
 /** Stable finding id: the rule and the sorted ids it targets (parts, then conductors). */
 export function findingId(ruleId: string, partIds: readonly string[], conductorIds: readonly string[]): string {
+  // Most findings name one target: no set and no sort for those (thousands per big design).
+  if (partIds.length + conductorIds.length === 1) return `${ruleId}:${partIds.length ? partIds[0] : conductorIds[0]}`
   const targets = [...new Set([...partIds, ...conductorIds])].sort()
   return `${ruleId}:${targets.join('+')}`
 }

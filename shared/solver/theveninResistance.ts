@@ -38,8 +38,33 @@ export interface FaultCurrent {
  * ] }, [{ id: 'end', a: 2, b: 0 }]) // [{ id: 'end', resistanceOhm: 0.03, openCircuitV: 12, currentA: 400 }]
  */
 export function faultCurrents(circuit: Circuit, faults: FaultLocation[], options: { cache?: SolverCache } = {}): FaultCurrent[] {
-  const none = (id: string): FaultCurrent => ({ id, resistanceOhm: Number.POSITIVE_INFINITY, openCircuitV: 0, currentA: 0 })
-  if (circuitShapeError(circuit) !== null) return faults.map((f) => none(f.id))
+  const inRange = (node: number) => Number.isInteger(node) && node >= 0 && node < (circuit?.nodeCount ?? 0)
+  // Positions that are not whole node numbers in range become −1 (no such node): reported as no fault current.
+  const a = Int32Array.from(faults, (f) => (inRange(f.a) ? f.a : -1))
+  const b = Int32Array.from(faults, (f) => (inRange(f.b) ? f.b : -1))
+  const table = faultCurrentTable(circuit, a, b, options)
+  return faults.map(({ id }, k) => ({ id, resistanceOhm: table.resistanceOhm[k], openCircuitV: table.openCircuitV[k], currentA: table.currentA[k] }))
+}
+
+/** faultCurrents as columns, for many faults at once: fault k is between nodes a[k] and b[k] (−1: no such node). */
+export interface FaultCurrentTable {
+  resistanceOhm: Float64Array
+  openCircuitV: Float64Array
+  currentA: Float64Array
+}
+
+/**
+ * The same figures as faultCurrents for faults given as two node columns, returned as columns (no
+ * object per fault: the analysis asks for one per device and per conductor).
+ * @example faultCurrentTable(circuit, Int32Array.of(2), Int32Array.of(0)).currentA[0] // 400 for the circuit above
+ */
+export function faultCurrentTable(circuit: Circuit, a: Int32Array, b: Int32Array, options: { cache?: SolverCache } = {}): FaultCurrentTable {
+  const count = a.length
+  const resistanceOhm = new Float64Array(count).fill(Number.POSITIVE_INFINITY)
+  const openCircuitVOut = new Float64Array(count)
+  const currentAOut = new Float64Array(count)
+  const result = { resistanceOhm, openCircuitV: openCircuitVOut, currentA: currentAOut }
+  if (circuitShapeError(circuit) !== null) return result
   const { elements, nodeCount } = circuit
   const prepared = prepareNetwork(circuit, (el) => el.kind === 'resistor' || el.kind === 'vsource')
   const table = buildElementTable(elements, prepared.active)
@@ -48,20 +73,27 @@ export function faultCurrents(circuit: Circuit, faults: FaultLocation[], options
   // Without loads the system is linear: after this call system.factor holds L D Lᵀ of the network.
   const outcome = solveNodal(system, table, openCircuitV, { maxIterations: 1, toleranceV: 1e-9, toleranceA: 1e-9 })
   const factorUsable = outcome.factored && openCircuitV.every(Number.isFinite)
+  if (!factorUsable) return result
   const { islandOfNode, islands } = prepared.islandMap
   const rth = theveninSolver(system)
-
-  return faults.map(({ id, a, b }) => {
-    const inRange = (node: number) => Number.isInteger(node) && node >= 0 && node < nodeCount
-    if (!factorUsable || !inRange(a) || !inRange(b)) return none(id)
-    if (a === b) return { id, resistanceOhm: 0, openCircuitV: 0, currentA: 0 }
-    const island = islandOfNode[a]
-    if (island !== islandOfNode[b] || !islands[island].hasSource) return none(id)
-    const resistanceOhm = rth(system.unknownOfNode[a], system.unknownOfNode[b])
-    const voc = openCircuitV[a] - openCircuitV[b]
-    const currentA = resistanceOhm > 0 ? Math.abs(voc) / resistanceOhm : 0
-    return { id, resistanceOhm, openCircuitV: voc, currentA: Number.isFinite(currentA) ? currentA : 0 }
-  })
+  for (let k = 0; k < count; k++) {
+    const na = a[k]
+    const nb = b[k]
+    if (na < 0 || nb < 0 || na >= nodeCount || nb >= nodeCount) continue
+    if (na === nb) {
+      resistanceOhm[k] = 0
+      continue
+    }
+    const island = islandOfNode[na]
+    if (island !== islandOfNode[nb] || !islands[island].hasSource) continue
+    const r = rth(system.unknownOfNode[na], system.unknownOfNode[nb])
+    const voc = openCircuitV[na] - openCircuitV[nb]
+    const currentA = r > 0 ? Math.abs(voc) / r : 0
+    resistanceOhm[k] = r
+    openCircuitVOut[k] = voc
+    currentAOut[k] = Number.isFinite(currentA) ? currentA : 0
+  }
+  return result
 }
 
 /** Rth between unknowns ua and ub (−1 for the grounded reference) by a sparse forward solve. */

@@ -1,5 +1,5 @@
 import type { Design } from '../../design/schema'
-import { faultCurrents, type FaultLocation } from '../../solver/theveninResistance'
+import { faultCurrentTable } from '../../solver/theveninResistance'
 import { compileCircuit, FAULT_STUDY_SCENARIO, type PreparedDesign } from '../compileCircuit'
 import type { ProtectionTopology } from '../protectionTopology'
 import { finite } from './finite'
@@ -26,18 +26,20 @@ export function faultStudy(design: Design, prepared: PreparedDesign, topology: P
   for (const el of compiled.circuit.elements) if (el.kind === 'vsource') bankNeg.set(el.id.slice(2), el.neg)
 
   // Faults in the order of their owners: the devices, then the conductors (results come back in that order).
-  const faults: FaultLocation[] = []
+  const faultA: number[] = []
+  const faultB: number[] = []
   const faultDevice: number[] = []
   prepared.devices.forEach((d, k) => {
     const t = topology.deviceList[k]
     const a = nodeAt(nodes, d.partId, d.loadTerminal)
     const b = t?.side === 'battery' && t.sourcePartId ? bankNeg.get(t.sourcePartId) : undefined
     if (a !== undefined && b !== undefined) {
-      faults.push({ id: `d:${d.id}`, a, b })
+      faultA.push(a)
+      faultB.push(b)
       faultDevice.push(k)
     }
   })
-  const deviceFaults = faults.length
+  const deviceFaults = faultA.length
   const faultConductor: number[] = []
   design.conductors.forEach((c, k) => {
     const t = topology.conductorList[k]
@@ -46,17 +48,19 @@ export function faultStudy(design: Design, prepared: PreparedDesign, topology: P
     const negTerminal = far ? nodes.terminalsOf.get(far.partId)?.find((term) => term.polarity === 'negative') : undefined
     const b = (negTerminal && far ? nodeAt(nodes, far.partId, negTerminal.id) : undefined) ?? bankNeg.get(t.sourcePartId)
     if (b !== undefined) {
-      faults.push({ id: `c:${c.id}`, a: t.downstreamNode, b })
+      faultA.push(t.downstreamNode)
+      faultB.push(b)
       faultConductor.push(k)
     }
   })
 
   const deviceFaultA = new Float64Array(prepared.devices.length)
   const conductorFarEndA = new Float64Array(design.conductors.length)
-  faultCurrents(compiled.circuit, faults, { cache: prepared.solverCache }).forEach((f, k) => {
-    const amps = finite(f.currentA)
+  const { currentA } = faultCurrentTable(compiled.circuit, Int32Array.from(faultA), Int32Array.from(faultB), { cache: prepared.solverCache })
+  for (let k = 0; k < currentA.length; k++) {
+    const amps = finite(currentA[k])
     if (k < deviceFaults) deviceFaultA[faultDevice[k]] = amps
     else conductorFarEndA[faultConductor[k - deviceFaults]] = amps
-  })
+  }
   return { deviceFaultA, conductorFarEndA }
 }
