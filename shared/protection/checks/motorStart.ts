@@ -9,7 +9,7 @@ import type { LoadStart, ProtectionDevice, ProtectionRule, ResolvedContext } fro
 
 const RULE_ID = 'motor-start-nuisance-open'
 const SOURCE =
-  "Device minimum melting / opening time (the family's time-current band) against the load's start pulse; " +
+  "Device minimum melting / opening time (the family's time-current band, or a library device's own datasheet points) against the load's start pulse; " +
   'motor inrush ~5–10 × running current for up to ~1 s (common practice)'
 
 // Time-delay versions of the same physical size are tried first, so the holder can stay.

@@ -8,7 +8,7 @@ import type { ProtectionDevice, ProtectionRule, ResolvedContext } from './types'
 const RULE_ID = 'not-selective'
 const SOURCE =
   'Selectivity by time-current bands: the downstream maximum clearing time must be below the upstream minimum ' +
-  'melting time at the downstream fault current (IEC 60269-1 / IEC 60364-5-53 principle, recalled; bands per family)'
+  'melting time at the downstream fault current (IEC 60269-1 / IEC 60364-5-53 principle, recalled; bands per family, or a library device\'s own datasheet points)'
 
 /** Fault currents a downstream fault draws through this device: at its terminals (largest) and far end. */
 function downstreamFaultsA(device: ProtectionDevice): number[] {
