@@ -5,7 +5,7 @@ import type { SolverCache } from '../solver/solverCache'
 import { protectiveDevices, type ProtectiveDevice } from './_lib/devices'
 import { finite } from './_lib/finite'
 import { buildPassiveCircuit, type PassiveCircuit } from './_lib/passiveCircuit'
-import { buildTerminalNodes, nodeAt, type TerminalNodes } from './_lib/terminalNodes'
+import { buildTerminalNodes, nodeAt, partPairNodes, type TerminalNodes } from './_lib/terminalNodes'
 
 /** Who an element stands for: a part (and which of its elements) or a conductor. */
 export interface ElementOwner {
@@ -100,14 +100,17 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
     const k = base.partIndex.get(partId)
     if (k !== undefined) partElementAt[k] = e
   }
-  for (const part of design.parts) {
-    const main = { kind: 'part' as const, id: part.id, role: 'main' }
+  // A load's, an inverter's and a mains charger's element sits across its two main terminals.
+  const pairs = partPairNodes(design, nodes)
+  const pairNode = (k: number, second: 0 | 1) => (pairs[2 * k + second] >= 0 ? pairs[2 * k + second] : undefined)
+  for (let k = 0; k < design.parts.length; k++) {
+    const part = design.parts[k]
     switch (part.type) {
       case 'load': {
         const level = loadSetting(part.id)
         if (level === 0) break
-        const pos = node(part.id, 'pos')
-        const neg = node(part.id, 'neg')
+        const pos = pairNode(k, 0)
+        const neg = pairNode(k, 1)
         if (!canSupply(pos, neg)) { noSupply(part); break }
         const p = part.params
         const inrush = scenario.motorStart && p.start ? p.start.inrushMultiple : 1
@@ -117,25 +120,25 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
             : p.model === 'resistance'
               ? { kind: 'resistor', id: `p:${part.id}`, a: pos!, b: neg!, resistanceOhm: finite((p.resistanceOhm ?? 1e6) / level / inrush, 1e6) }
               : { kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite((p.powerW ?? 0) * level * inrush), minVoltageV }
-        setOwn(part.id, add(el, main))
+        setOwn(part.id, add(el, { kind: 'part', id: part.id, role: 'main' }))
         break
       }
       case 'inverter': {
         const level = loadSetting(part.id)
         if (level === 0) break
-        const pos = node(part.id, 'pos')
-        const neg = node(part.id, 'neg')
+        const pos = pairNode(k, 0)
+        const neg = pairNode(k, 1)
         if (!canSupply(pos, neg)) { noSupply(part); break }
         const acW = scenario.motorStart ? part.params.surgeW : part.params.continuousW * level
-        setOwn(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite(acW / part.params.efficiency), minVoltageV }, main))
+        setOwn(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite(acW / part.params.efficiency), minVoltageV }, { kind: 'part', id: part.id, role: 'main' }))
         break
       }
       case 'mains-charger': {
         if (!(scenario.chargerOn || loadSetting(part.id) > 0)) break
-        const pos = node(part.id, 'bat-pos')
-        const neg = node(part.id, 'bat-neg')
+        const pos = pairNode(k, 0)
+        const neg = pairNode(k, 1)
         if (!canSupply(pos, neg)) { noSupply(part); break }
-        setOwn(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: neg!, to: pos!, currentA: part.params.outputCurrentA }, main))
+        setOwn(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: neg!, to: pos!, currentA: part.params.outputCurrentA }, { kind: 'part', id: part.id, role: 'main' }))
         break
       }
       case 'dc-dc-charger': {
@@ -145,7 +148,7 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
         if (!canSupply(...ns)) { noSupply(part); break }
         const outA = part.params.outputCurrentA * level
         add({ kind: 'cpower', id: `p:${part.id}#in`, pos: ns[0]!, neg: ns[1]!, powerW: finite((outA * nominalV) / part.params.efficiency), minVoltageV: part.params.inputMinV }, { kind: 'part', id: part.id, role: 'input' })
-        setOwn(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: ns[3]!, to: ns[2]!, currentA: finite(outA) }, main))
+        setOwn(part.id, add({ kind: 'isource', id: `p:${part.id}`, from: ns[3]!, to: ns[2]!, currentA: finite(outA) }, { kind: 'part', id: part.id, role: 'main' }))
         break
       }
       case 'charge-controller': {

@@ -127,3 +127,27 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
     },
   }) as TerminalNodes
 }
+
+/** The two terminals whose voltage is a part's own voltage, and across which its own element sits. */
+const TWO_TERMINALS: Record<string, [string, string]> = {
+  battery: ['pos', 'neg'], load: ['pos', 'neg'], inverter: ['pos', 'neg'], 'pv-array': ['pos', 'neg'],
+  'mains-charger': ['bat-pos', 'bat-neg'], 'charge-controller': ['bat-pos', 'bat-neg'], 'dc-dc-charger': ['out-pos', 'out-neg'],
+  fuse: ['line', 'load'], breaker: ['line', 'load'], 'battery-switch': ['a', 'b'], shunt: ['battery', 'system'],
+  'fuse-panel': ['in-pos', 'in-neg'],
+}
+
+/** Per part, the nodes of its two main terminals (−1 when it has none), built once per analysis. */
+const PAIR_CACHE = new WeakMap<TerminalNodes, Int32Array>()
+export function partPairNodes(design: Design, nodes: TerminalNodes): Int32Array {
+  let pairs = PAIR_CACHE.get(nodes)
+  if (pairs && pairs.length === 2 * design.parts.length) return pairs
+  pairs = new Int32Array(2 * design.parts.length).fill(-1)
+  design.parts.forEach((part, i) => {
+    const pair = TWO_TERMINALS[part.type]
+    if (!pair) return
+    pairs![2 * i] = nodeAt(nodes, part.id, pair[0]) ?? -1
+    pairs![2 * i + 1] = nodeAt(nodes, part.id, pair[1]) ?? -1
+  })
+  PAIR_CACHE.set(nodes, pairs)
+  return pairs
+}
