@@ -113,7 +113,7 @@ describe('two people on one design', () => {
     await designer.locator('[data-testid="revision-save"]').click()
     await poll(() => designer.locator('[data-testid="revision-list"] .v-list-item').count()).toBe(2)
     for (const [label, revision] of [['From', 'Issued for review'], ['To', 'As built']]) {
-      await designer.locator('.v-select').filter({ hasText: label }).click()
+      await designer.locator('[data-testid="revisions-dialog"] .v-select').filter({ hasText: label }).click()
       await designer.locator('.v-select__content .v-list-item').filter({ hasText: revision }).click()
     }
     await designer.getByRole('button', { name: 'Compare' }).click()
