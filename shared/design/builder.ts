@@ -92,10 +92,10 @@ export function mainDistribution(part: PartMaker, d: MainDistribution): Part[] {
   return [
     part('fuse', 'main-fuse', `Main fuse Class T ${d.mainFuseA} A`, d.x, d.y, { family: 'class-t', ratingA: d.mainFuseA, dcVoltageRatingV: 160,
       interruptingRatingA: 20000 }),
-    part('battery-switch', 'main-switch', d.switchLabel, d.x + 140, d.y, { ratingA: 300 }),
+    part('battery-switch', 'main-switch', d.switchLabel, d.x + 176, d.y, { ratingA: 300 }),
     part('shunt', 'shunt', 'Shunt 500 A / 50 mV', d.x, d.negY, { ratingA: 500, resistanceOhm: 0.0001 }),
-    part('bus-bar', 'pos-bus', 'Positive bus', d.x + 280, d.y, { ratingA: d.busRatingA, polarity: 'positive', studs: d.busStuds }),
-    part('bus-bar', 'neg-bus', 'Negative bus', d.x + 280, d.negY, { ratingA: d.busRatingA, polarity: 'negative', studs: d.busStuds }),
+    part('bus-bar', 'pos-bus', 'Positive bus', d.x + 352, d.y, { ratingA: d.busRatingA, polarity: 'positive', studs: d.busStuds }),
+    part('bus-bar', 'neg-bus', 'Negative bus', d.x + 352, d.negY, { ratingA: d.busRatingA, polarity: 'negative', studs: d.busStuds }),
   ]
 }
 
