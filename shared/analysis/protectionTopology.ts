@@ -1,7 +1,7 @@
 import type { Design } from '../design/schema'
 import type { ProtectiveDevice } from './_lib/devices'
 import { MinHeap } from './_lib/minHeap'
-import { nodeAt, polarityAt, type TerminalNodes } from './_lib/terminalNodes'
+import { nodeAt, type TerminalNodes } from './_lib/terminalNodes'
 
 export type SupplySide = 'battery' | 'pv' | 'none'
 
@@ -68,7 +68,6 @@ interface Graph {
 export function protectionTopology(design: Design, nodes: TerminalNodes, devices: ProtectiveDevice[]): ProtectionTopology {
   const n = nodes.nodeCount
   const nodeOf = (partId: string, terminal: string) => nodeAt(nodes, partId, terminal)
-  const polarityOf = (partId: string, terminal: string) => polarityAt(nodes, partId, terminal)
 
   // Graph of the positive network: conductors (length) and series parts (0 m). Open devices count:
   // protection is a property of the wiring, not of a switch position.
@@ -81,7 +80,7 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
   design.conductors.forEach((c, i) => {
     const a = nodes.conductorFrom[i]
     const b = nodes.conductorTo[i]
-    const positive = polarityOf(c.from.partId, c.from.terminal) === 'positive' || polarityOf(c.to.partId, c.to.terminal) === 'positive'
+    const positive = nodes.conductorFromPolarity[i] === 'positive' || nodes.conductorToPolarity[i] === 'positive'
     conductorEnds.push({ a, b, positive })
     if (a < 0 || b < 0 || !positive) return
     edgeA.push(a); edgeB.push(b); edgeLen.push(c.lengthM); edgeConductor.push(i); edgeDevice.push(-1)

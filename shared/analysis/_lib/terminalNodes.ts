@@ -25,10 +25,11 @@ function internalJoins(part: Part, terminals: TerminalInfo[]): string[][] {
   }
 }
 
-/** The terminals of one part id: their ids and, at the same index, their node numbers. */
+/** The terminals of one part id: their ids and, at the same index, their node numbers; and the catalogue's list. */
 interface PartTerminalNodes {
   ids: string[]
   nodes: number[]
+  terminals: TerminalInfo[]
 }
 
 export interface TerminalNodes {
@@ -44,6 +45,9 @@ export interface TerminalNodes {
   /** Per conductor (design order), the node of its from and to terminal, −1 for an unknown terminal. */
   conductorFrom: Int32Array
   conductorTo: Int32Array
+  /** Per conductor (design order), the polarity of its from and to terminal (undefined: unknown terminal). */
+  conductorFromPolarity: (TerminalInfo['polarity'] | undefined)[]
+  conductorToPolarity: (TerminalInfo['polarity'] | undefined)[]
 }
 
 /** Node of a part's terminal, undefined when the part or the terminal does not exist. */
@@ -56,7 +60,7 @@ export function nodeAt(nodes: TerminalNodes, partId: string, terminal: string): 
 
 /** Polarity of a part's terminal as the catalogue gives it for this part, undefined when unknown. */
 export function polarityAt(nodes: TerminalNodes, partId: string, terminal: string): TerminalInfo['polarity'] | undefined {
-  const terminals = nodes.terminalsOf.get(partId)
+  const terminals = nodes.byPart.get(partId)?.terminals
   if (!terminals) return undefined
   for (const t of terminals) if (t.id === terminal) return t.polarity
   return undefined
@@ -69,11 +73,14 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
   const terminalsOf = new Map<string, TerminalInfo[]>()
   const slotPart: string[] = []
   const slotTerminal: string[] = []
-  for (const part of design.parts) {
+  const entryAt: PartTerminalNodes[] = new Array(design.parts.length)
+  design.parts.forEach((part, k) => {
     const terminals = partTerminals(part)
     terminalsOf.set(part.id, terminals)
     let entry = byPart.get(part.id)
-    if (!entry) byPart.set(part.id, (entry = { ids: [], nodes: [] }))
+    if (!entry) byPart.set(part.id, (entry = { ids: [], nodes: [], terminals }))
+    entry.terminals = terminals // the last part with an id gives its terminal list, as terminalsOf does
+    entryAt[k] = entry
     for (const t of terminals) {
       if (entry.ids.includes(t.id)) continue
       entry.ids.push(t.id)
@@ -81,11 +88,12 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
       slotPart.push(part.id)
       slotTerminal.push(t.id)
     }
-  }
+  })
   const uf = new UnionFind(slotPart.length)
-  for (const part of design.parts) {
-    const entry = byPart.get(part.id)!
-    for (const group of internalJoins(part, terminalsOf.get(part.id) ?? [])) {
+  for (let k = 0; k < design.parts.length; k++) {
+    const part = design.parts[k]
+    const entry = entryAt[k]
+    for (const group of internalJoins(part, entry.terminals)) {
       let first = -1
       for (const id of group) {
         const i = entry.ids.indexOf(id)
@@ -108,15 +116,27 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
   }
   for (const entry of byPart.values()) for (let k = 0; k < entry.nodes.length; k++) entry.nodes[k] = nodeOfSlot[entry.nodes[k]]
 
-  const nodes = { nodeCount: nodeNames.length, nodeNames, terminalsOf, byPart } as Omit<TerminalNodes, 'nodeOf' | 'conductorFrom' | 'conductorTo'>
-  const conductorFrom = new Int32Array(design.conductors.length)
-  const conductorTo = new Int32Array(design.conductors.length)
+  const count = design.conductors.length
+  const conductorFrom = new Int32Array(count)
+  const conductorTo = new Int32Array(count)
+  const conductorFromPolarity: (TerminalInfo['polarity'] | undefined)[] = new Array(count)
+  const conductorToPolarity: (TerminalInfo['polarity'] | undefined)[] = new Array(count)
+  // One part look-up per conductor end gives both the node and the polarity.
+  const end = (partId: string, terminal: string): [number, TerminalInfo['polarity'] | undefined] => {
+    const entry = byPart.get(partId)
+    if (!entry) return [-1, undefined]
+    const i = entry.ids.indexOf(terminal)
+    let polarity: TerminalInfo['polarity'] | undefined
+    for (const t of entry.terminals) if (t.id === terminal) { polarity = t.polarity; break }
+    return [i < 0 ? -1 : entry.nodes[i], polarity]
+  }
   design.conductors.forEach((c, i) => {
-    conductorFrom[i] = nodeAt(nodes as TerminalNodes, c.from.partId, c.from.terminal) ?? -1
-    conductorTo[i] = nodeAt(nodes as TerminalNodes, c.to.partId, c.to.terminal) ?? -1
+    ;[conductorFrom[i], conductorFromPolarity[i]] = end(c.from.partId, c.from.terminal)
+    ;[conductorTo[i], conductorToPolarity[i]] = end(c.to.partId, c.to.terminal)
   })
+  const nodes = { nodeCount: nodeNames.length, nodeNames, terminalsOf, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity }
   let nodeOf: Map<string, number> | undefined
-  return Object.defineProperty({ ...nodes, conductorFrom, conductorTo }, 'nodeOf', {
+  return Object.defineProperty(nodes, 'nodeOf', {
     enumerable: true,
     get: () => {
       if (!nodeOf) {

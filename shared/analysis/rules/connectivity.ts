@@ -1,4 +1,3 @@
-import { polarityAt } from '../_lib/terminalNodes'
 import { makeFinding } from '../findings'
 import type { Finding } from '../types'
 import type { Rule } from './types'
@@ -49,10 +48,10 @@ export const conductorPolarityRule: Rule = {
   source: 'Circuit model (terminal polarity from the part catalogue); common practice',
   run(ctx) {
     const findings: Finding[] = []
-    const polarity = (partId: string, terminal: string) => polarityAt(ctx.nodes, partId, terminal)
-    for (const c of ctx.design.conductors) {
-      const a = polarity(c.from.partId, c.from.terminal)
-      const b = polarity(c.to.partId, c.to.terminal)
+    for (let i = 0; i < ctx.design.conductors.length; i++) {
+      const c = ctx.design.conductors[i]
+      const a = ctx.nodes.conductorFromPolarity[i]
+      const b = ctx.nodes.conductorToPolarity[i]
       if (!a || !b || a === b) continue
       findings.push(makeFinding({
         ruleId: this.id, severity: 'error', title: this.title, partIds: [...new Set([c.from.partId, c.to.partId])].sort(), conductorIds: [c.id],
