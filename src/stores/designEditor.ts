@@ -1,7 +1,7 @@
 // The open design: its Y.Doc handle, live analysis, save state and what is selected. One design is
 // open at a time; `open` starts an effect scope for it and `close` ends it (worker, timers, doc).
 import { acceptHMRUpdate, defineStore } from 'pinia'
-import { computed, effectScope, markRaw, ref, shallowRef, type EffectScope } from 'vue'
+import { computed, effectScope, markRaw, ref, shallowRef, watch, type EffectScope } from 'vue'
 import type { Design } from '@shared/design/schema'
 import { useDesignDoc, type DesignDocHandle } from '@/composables/useDesignDoc'
 import { useDesignAnalysis, type DesignAnalysis } from '@/composables/useDesignAnalysis'
@@ -9,6 +9,7 @@ import { useDesignSave } from '@/composables/useDesignSave'
 import type { CollabConnection } from '@/composables/useCollabProvider'
 import type { AnalysisResult, Finding } from '@/components/editor/model/analysisTypes'
 import { indexAnalysis, type AnalysisIndex } from '@/components/editor/model/analysisIndex'
+import { createCanvasMarks, updateCanvasMarks } from '@/components/editor/model/canvasMarks'
 
 export interface OpenDesignOptions {
   design: Design
@@ -82,6 +83,9 @@ export const useDesignEditorStore = defineStore('designEditor', () => {
   const design = computed<Design | null>(() => handle.value?.design.value ?? null)
   const result = computed<AnalysisResult | null>(() => analysis.value?.result.value ?? null)
   const index = computed<AnalysisIndex>(() => indexAnalysis(result.value, scenarioId.value))
+  /** Per-id view of `index` for the canvas: only the entries that changed trigger a re-render. */
+  const marks = markRaw(createCanvasMarks())
+  watch(index, (next) => updateCanvasMarks(marks, next), { immediate: true })
   const findings = computed<Finding[]>(() => result.value?.findings ?? [])
   // Live: the server stores each update as it arrives, so "saved" follows the connection.
   const saveState = computed(() => {
@@ -109,6 +113,7 @@ export const useDesignEditorStore = defineStore('designEditor', () => {
     design,
     result,
     index,
+    marks,
     findings,
     saveState,
     open,
