@@ -42,6 +42,8 @@ export interface BomDeviceLine {
   kind: 'fuse' | 'breaker'
   family: DeviceFamilyId
   familyLabel: string
+  /** A device copied from the organisation's library: its own name (bought as that product). */
+  libraryDeviceName?: string
   ratingA: number
   quantity: number
 }
@@ -89,15 +91,17 @@ export function buildBillOfMaterials(design: Design, options: { wasteAllowancePc
   const wasteAllowancePct = options.wasteAllowancePct ?? DEFAULT_WASTE_ALLOWANCE_PCT
   const parts = new Map<string, BomPartLine>()
   const devices = new Map<string, BomDeviceLine>()
-  const addDevice = (kind: 'fuse' | 'breaker', family: DeviceFamilyId, ratingA: number, quantity = 1) => {
-    const key = `${kind}|${family}|${ratingA}`
-    const line = devices.get(key) ?? { kind, family, familyLabel: DEVICE_FAMILIES[family]?.label ?? family, ratingA, quantity: 0 }
-    line.quantity += quantity
+  const addDevice = (kind: 'fuse' | 'breaker', family: DeviceFamilyId, ratingA: number, libraryDeviceName?: string) => {
+    const key = `${kind}|${family}|${ratingA}|${libraryDeviceName ?? ''}`
+    const familyLabel = DEVICE_FAMILIES[family]?.label ?? family
+    const line = devices.get(key)
+      ?? { kind, family, familyLabel: libraryDeviceName ? `${libraryDeviceName} (library device)` : familyLabel, libraryDeviceName, ratingA, quantity: 0 }
+    line.quantity += 1
     devices.set(key, line)
   }
   for (const part of design.parts) {
     if (part.type === 'fuse' || part.type === 'breaker') {
-      addDevice(part.type, part.params.family, part.params.ratingA)
+      addDevice(part.type, part.params.family, part.params.ratingA, part.params.customDevice?.name)
       continue
     }
     if (part.type === 'fuse-panel') {

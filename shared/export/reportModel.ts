@@ -39,6 +39,13 @@ export interface ReportModel {
   cautions: string[]
 }
 
+/** The device column: the family, or a library device's own name beside its family. */
+function deviceFamilyText(params: Extract<Part, { type: 'fuse' | 'breaker' | 'fuse-panel' }>['params']): string {
+  const family = DEVICE_FAMILIES[params.family]?.label ?? params.family
+  const custom = 'customDevice' in params ? params.customDevice : undefined
+  return custom ? `${custom.name} (library device; ${family})` : family
+}
+
 const SEVERITY_RANK: Record<Severity, number> = { error: 0, warning: 1, info: 2 }
 const f = formatNumber
 const q = (x: Quantity | undefined) => (x ? `${formatSignificant(x.value, 3)} ${x.unit}`.trim() : '')
@@ -120,7 +127,7 @@ export function buildReportModel(design: Design, analysis: AnalysisResult, info:
       const part = partById.get(d.partId)
       const params = part && (part.type === 'fuse' || part.type === 'breaker' || part.type === 'fuse-panel') ? part.params : undefined
       const way = d.id.includes('#') ? ` ${d.id.split('#')[1]}` : ''
-      return [`${name(d.partId)}${way}`, params ? DEVICE_FAMILIES[params.family]?.label ?? params.family : '', f(d.ratingA, 1), f(d.maxCurrentA, 1),
+      return [`${name(d.partId)}${way}`, params ? deviceFamilyText(params) : '', f(d.ratingA, 1), f(d.maxCurrentA, 1),
         f(d.faultCurrentA, 0), params ? f(params.interruptingRatingA, 0) : '', params ? f(params.dcVoltageRatingV, 0) : '',
         d.protectsConductorIds.map((id) => conductorName.get(id) ?? id).join(', ')]
     }),

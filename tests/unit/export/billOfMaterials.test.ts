@@ -66,6 +66,23 @@ describe('buildBillOfMaterials', () => {
   })
 })
 
+describe('buildBillOfMaterials with a library device', () => {
+  it('lists a device copied from the library under its own name, apart from the generic family at the same rating', () => {
+    const design = createEmptyDesign({ name: 'Library device line', nominalVoltageV: 12, profile: 'vehicle' })
+    const band = { minMeltPoints: [{ currentA: 20, timeS: 100 }, { currentA: 150, timeS: 0.01 }],
+      maxClearPoints: [{ currentA: 30, timeS: 100 }, { currentA: 200, timeS: 0.01 }] }
+    const customDevice = { name: 'Workshop time-delay fuse 15 A', kind: 'fuse' as const, ratingA: 15, timeDelay: true, source: 'user datasheet points', ...band }
+    design.parts.push(
+      makePart(design.settings, 'fuse', 'generic', 'Generic 15 A', { x: 0, y: 0 }, { family: 'blade-regular', ratingA: 15 }),
+      makePart(design.settings, 'fuse', 'library', 'Library 15 A', { x: 0, y: 200 }, { family: 'blade-regular', ratingA: 15, customDevice }),
+    )
+    const lines = buildBillOfMaterials(design).devices
+    expect(lines).toHaveLength(2)
+    expect(lines.find((l) => l.libraryDeviceName)).toMatchObject({ familyLabel: 'Workshop time-delay fuse 15 A (library device)', ratingA: 15, quantity: 1 })
+    expect(lines.find((l) => !l.libraryDeviceName)).toMatchObject({ family: 'blade-regular', ratingA: 15, quantity: 1 })
+  })
+})
+
 describe('buildSpares', () => {
   const demo = createDemoDesign()
   const bom = buildBillOfMaterials(demo)
