@@ -4,7 +4,7 @@ import type { OperatingPoint } from '../../solver/circuit'
 import { compileCircuit, type CompiledCircuit, type PreparedDesign } from '../compileCircuit'
 import type { Finding, ScenarioConductorResult, ScenarioPartResult, ScenarioResult } from '../types'
 import { finite } from './finite'
-import { nodeAt, partPairNodes } from './terminalNodes'
+import { nodeAt, partPairNodes, type TerminalNodes } from './terminalNodes'
 import { compileProblemFindings, solverProblemFindings } from './solverFindings'
 
 export interface ScenarioSolve {
@@ -49,25 +49,27 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
   const conductorCurrentA = new Float64Array(design.conductors.length)
   const conductorDropPercent = new Float64Array(design.conductors.length)
   const conductorAt = compiled.conductorElementAt
-  const conductors: ScenarioConductorResult[] = new Array(design.conductors.length)
   for (let i = 0; i < design.conductors.length; i++) {
-    const id = design.conductors[i].id
     const e = conductorAt[i]
-    if (e < 0) {
-      conductors[i] = { id, currentA: 0, dropV: 0, dropPercent: 0, fromV: 0, toV: 0 }
-      continue
-    }
+    if (e < 0) continue
     const el = elements[e]
     const currentA = finite(elementCurrentA[e])
     conductorCurrentA[i] = currentA
+    conductorDropPercent[i] = finite((100 * (el.kind === 'resistor' ? Math.abs(currentA) * el.resistanceOhm : 0)) / nominalV)
+  }
+  const ids = idLists(design, compiled.nodes)
+  // The per-conductor records of the result, from the same figures (built when first read, see scenarioResult).
+  const conductorRecords = (): ScenarioConductorResult[] => ids.conductors.map((id, i) => {
+    const e = conductorAt[i]
+    if (e < 0) return { id, currentA: 0, dropV: 0, dropPercent: 0, fromV: 0, toV: 0 }
+    const el = elements[e]
+    const currentA = conductorCurrentA[i]
     const dropV = el.kind === 'resistor' ? Math.abs(currentA) * el.resistanceOhm : 0
-    const dropPercent = finite((100 * dropV) / nominalV)
-    conductorDropPercent[i] = dropPercent
-    conductors[i] = {
-      id, currentA, dropV: finite(dropV), dropPercent,
+    return {
+      id, currentA, dropV: finite(dropV), dropPercent: conductorDropPercent[i],
       fromV: referenced(el.kind === 'resistor' ? el.a : undefined), toV: referenced(el.kind === 'resistor' ? el.b : undefined),
     }
-  }
+  })
 
   const deviceAt = compiled.deviceElementAt
   const deviceCurrentA = new Float64Array(deviceAt.length)
@@ -89,17 +91,17 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
   const pairs = partPairNodes(design, compiled.nodes)
   const partAt = compiled.partElementAt
   const partCurrentA = new Float64Array(design.parts.length)
-  const parts: ScenarioPartResult[] = new Array(design.parts.length)
   for (let i = 0; i < design.parts.length; i++) {
-    const part = design.parts[i]
     const e = partAt[i]
-    const currentA = e >= 0 ? finite(elementCurrentA[e]) : (panelCurrent.get(part.id) ?? 0)
-    partCurrentA[i] = currentA
+    partCurrentA[i] = e >= 0 ? finite(elementCurrentA[e]) : (panelCurrent.get(design.parts[i].id) ?? 0)
+  }
+  const partRecords = (): ScenarioPartResult[] => ids.parts.map((id, i) => {
+    const e = partAt[i]
     const a = pairs[2 * i]
     const b = pairs[2 * i + 1]
     const voltageV = a >= 0 && b >= 0 && a < v.length && b < v.length ? finite(v[a]) - finite(v[b]) : 0
-    parts[i] = { id: part.id, currentA, powerW: e >= 0 ? finite(op.elementPowerW[e]) : 0, voltageV }
-  }
+    return { id, currentA: partCurrentA[i], powerW: e >= 0 ? finite(op.elementPowerW[e]) : 0, voltageV }
+  })
 
   // A shorted source: name the conductors joined straight across it as well as the source.
   const problems = op.problems.map((p) => {
@@ -122,22 +124,46 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
   const status: ScenarioResult['status'] = op.status !== 'ok' ? 'not-converged' : broken ? 'failed' : 'ok'
   return {
     scenario, compiled, op, conductorCurrentA, conductorDropPercent, deviceCurrentA, partCurrentA, voltageAcross, findings,
-    result: scenarioResult({ id: scenario.id, name: scenario.name, status, conductors, parts }, () => {
-      // Built on first read (the editor, JSON and postMessage read it; the rules never do): one key per terminal.
-      const terminals: Record<string, number> = {}
-      for (const [key, n] of compiled.nodes.nodeOf) terminals[key] = referenced(n)
-      return terminals
+    result: scenarioResult({ id: scenario.id, name: scenario.name, status }, {
+      conductors: conductorRecords,
+      parts: partRecords,
+      // One key per terminal.
+      terminals: () => {
+        const terminals: Record<string, number> = {}
+        for (const [key, n] of compiled.nodes.nodeOf) terminals[key] = referenced(n)
+        return terminals
+      },
     }),
   }
 }
 
-/** A scenario result whose `terminals` record is an enumerable property computed once, when first read. */
-function scenarioResult(base: Omit<ScenarioResult, 'terminals'>, build: () => Record<string, number>): ScenarioResult {
-  let terminals: Record<string, number> | undefined
-  return Object.defineProperty(base, 'terminals', {
-    enumerable: true,
-    configurable: true,
-    get: () => (terminals ??= build()),
-    set: (value: Record<string, number>) => { terminals = value },
-  }) as ScenarioResult
+type LazyFields = Pick<ScenarioResult, 'conductors' | 'parts' | 'terminals'>
+
+/**
+ * A scenario result whose per-conductor, per-part and per-terminal records are enumerable properties
+ * computed once, when first read: the editor, JSON and postMessage read them (for the scenario on
+ * show), the rules never do — they read the same figures from the solve's arrays.
+ */
+function scenarioResult(base: Omit<ScenarioResult, keyof LazyFields>, build: { [K in keyof LazyFields]: () => LazyFields[K] }): ScenarioResult {
+  for (const key of ['conductors', 'parts', 'terminals'] as const) {
+    let value: LazyFields[typeof key] | undefined
+    Object.defineProperty(base, key, {
+      enumerable: true,
+      configurable: true,
+      get: () => (value ??= build[key]()),
+      set: (next: LazyFields[typeof key]) => { value = next },
+    })
+  }
+  return base as ScenarioResult
+}
+
+/** Conductor and part ids in design order, taken once per analysis (the records above may be built later). */
+const ID_CACHE = new WeakMap<TerminalNodes, { conductors: string[]; parts: string[] }>()
+function idLists(design: Design, nodes: TerminalNodes): { conductors: string[]; parts: string[] } {
+  let ids = ID_CACHE.get(nodes)
+  if (!ids || ids.conductors.length !== design.conductors.length || ids.parts.length !== design.parts.length) {
+    ids = { conductors: design.conductors.map((c) => c.id), parts: design.parts.map((p) => p.id) }
+    ID_CACHE.set(nodes, ids)
+  }
+  return ids
 }
