@@ -1,7 +1,7 @@
 import { makeFinding } from '../../analysis/findings'
 import type { Finding } from '../../analysis/types'
 import { bandOfDevice } from '../timeCurrent'
-import { ICEA_SOURCE, shortCircuitLimit, withstandTimeS } from '../withstand'
+import { ICEA_SOURCE, shortCircuitLimit, withstandI2tA2s, type WithstandOptions } from '../withstand'
 import { amps, seconds } from './_lib/format'
 import { partIdOf, positive, upstreamChain } from './_lib/chain'
 import type { ProtectionDevice, ProtectionRule, ResolvedContext } from './types'
@@ -24,24 +24,32 @@ interface Case {
 function faultCases(device: ProtectionDevice): Case[] {
   const conductor = device.conductor
   if (!conductor) return []
+  const farA = positive(device.faultCurrentFarEndA)
+  const atDeviceA = positive(device.faultCurrentAtDeviceA)
+  if (farA === undefined && atDeviceA === undefined) return []
   const limit = shortCircuitLimit({ insulationRatingC: conductor.insulationRatingC, insulation: conductor.insulation })
   const initialC = conductor.operatingC ?? conductor.insulationRatingC
   const band = bandOfDevice(device)
+  // The conductor's I²t is the same for both positions: worked out once (withstand = I²t ÷ I², as
+  // withstandTimeS does), without copying the conductor per case.
+  // A conductor rated at or above its short-circuit limit has no margin at all: withstand 0 s.
+  const i2tA2s = initialC >= limit.finalC ? 0 : withstandI2tA2s(withstandOptions(conductor, initialC, limit.finalC))
   const cases: Case[] = []
-  const positions = [
-    ['far end', positive(device.faultCurrentFarEndA)],
-    ['device terminals', positive(device.faultCurrentAtDeviceA)],
-  ] as const
-  for (const [where, currentA] of positions) {
-    if (currentA === undefined) continue
-    // A conductor rated at or above its short-circuit limit has no margin at all: withstand 0 s.
-    const withstandS =
-      initialC >= limit.finalC ? 0 : withstandTimeS({ ...conductor, currentA, initialC, finalC: limit.finalC })
+  const add = (where: Case['where'], currentA: number | undefined) => {
+    if (currentA === undefined) return
+    const withstandS = initialC >= limit.finalC ? 0 : i2tA2s / (currentA * currentA)
     // A current too small to give a finite adiabatic time (a vanishing fault) cannot damage the conductor.
-    if (!Number.isFinite(withstandS)) continue
+    if (!Number.isFinite(withstandS)) return
     cases.push({ where, currentA, withstandS, clearS: band.maxClearS(currentA) })
   }
+  add('far end', farA)
+  add('device terminals', atDeviceA)
   return cases
+}
+
+/** The withstand inputs of a protected conductor (its area fields and material) at given temperatures. */
+function withstandOptions(conductor: NonNullable<ProtectionDevice['conductor']>, initialC: number, finalC: number): WithstandOptions {
+  return { sizeId: conductor.sizeId, areaCmil: conductor.areaCmil, areaMm2: conductor.areaMm2, material: conductor.material, initialC, finalC }
 }
 
 /** The first upstream device sure to clear `currentA` within `withinS`, if any (backup protection). */
