@@ -45,7 +45,7 @@ export function faultStudy(design: Design, prepared: PreparedDesign, topology: P
     const t = topology.conductorList[k]
     if (!t || t.side !== 'battery' || !t.sourcePartId) return
     const far = nodes.conductorFrom[k] === t.downstreamNode ? c.from : nodes.conductorTo[k] === t.downstreamNode ? c.to : undefined
-    const negTerminal = far ? nodes.terminalsOf.get(far.partId)?.find((term) => term.polarity === 'negative') : undefined
+    const negTerminal = far ? nodes.byPart.get(far.partId)?.terminals.find((term) => term.polarity === 'negative') : undefined
     const b = (negTerminal && far ? nodeAt(nodes, far.partId, negTerminal.id) : undefined) ?? bankNeg.get(t.sourcePartId)
     if (b !== undefined) {
       faultA.push(t.downstreamNode)

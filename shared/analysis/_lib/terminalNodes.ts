@@ -38,8 +38,8 @@ export interface TerminalNodes {
   readonly nodeOf: Map<string, number>
   /** Per node, the first terminal key on it (for netlists and messages). */
   nodeNames: string[]
-  /** Per part, its terminals (with polarity) as the catalogue gives them for this part. */
-  terminalsOf: Map<string, TerminalInfo[]>
+  /** Per part, its terminals (with polarity) as the catalogue gives them for this part (built on first read; byPart holds them too). */
+  readonly terminalsOf: Map<string, TerminalInfo[]>
   /** Per part id, its terminal ids and their nodes: look-ups without building "partId:terminal" strings. */
   byPart: Map<string, PartTerminalNodes>
   /** Per conductor (design order), the node of its from and to terminal, −1 for an unknown terminal. */
@@ -66,29 +66,69 @@ export function polarityAt(nodes: TerminalNodes, partId: string, terminal: strin
   return undefined
 }
 
+/**
+ * The distinct terminal ids of a catalogue list, in order. Lists the catalogue hands out as constants
+ * (every part type but bus bars and fuse panels, whose lists are made per part) give one shared,
+ * read-only array per list.
+ */
+const IDS_OF_LIST = new WeakMap<TerminalInfo[], string[]>()
+const SHARED_IDS = new WeakSet<string[]>()
+function distinctIds(terminals: TerminalInfo[], constantList: boolean): string[] {
+  const known = constantList ? IDS_OF_LIST.get(terminals) : undefined
+  if (known) return known
+  const ids: string[] = []
+  for (const t of terminals) if (!ids.includes(t.id)) ids.push(t.id)
+  if (!constantList) return ids
+  IDS_OF_LIST.set(terminals, ids)
+  SHARED_IDS.add(ids)
+  return ids
+}
+
+function nodeIn(entry: PartTerminalNodes, terminal: string): number {
+  const i = entry.ids.indexOf(terminal)
+  return i < 0 ? -1 : entry.nodes[i]
+}
+
+function polarityIn(terminals: TerminalInfo[], terminal: string): TerminalInfo['polarity'] | undefined {
+  for (const t of terminals) if (t.id === terminal) return t.polarity
+  return undefined
+}
+
 /** One node per terminal after the internal joins; numbering follows the part order. */
 export function buildTerminalNodes(design: Design): TerminalNodes {
   // Terminal slots in part order; a repeated part id shares the slots of its terminal ids.
   const byPart = new Map<string, PartTerminalNodes>()
-  const terminalsOf = new Map<string, TerminalInfo[]>()
   const slotPart: string[] = []
   const slotTerminal: string[] = []
-  const entryAt: PartTerminalNodes[] = new Array(design.parts.length)
-  design.parts.forEach((part, k) => {
+  const parts = design.parts
+  const entryAt: PartTerminalNodes[] = new Array(parts.length)
+  for (let k = 0; k < parts.length; k++) {
+    const part = parts[k]
     const terminals = partTerminals(part)
-    terminalsOf.set(part.id, terminals)
     let entry = byPart.get(part.id)
-    if (!entry) byPart.set(part.id, (entry = { ids: [], nodes: [], terminals }))
-    entry.terminals = terminals // the last part with an id gives its terminal list, as terminalsOf does
-    entryAt[k] = entry
-    for (const t of terminals) {
-      if (entry.ids.includes(t.id)) continue
-      entry.ids.push(t.id)
-      entry.nodes.push(slotPart.length) // the slot for now; replaced by the node below
-      slotPart.push(part.id)
-      slotTerminal.push(t.id)
+    if (!entry) {
+      // The usual case, a part id seen once: its ids (shared per catalogue list) and one slot each.
+      const ids = distinctIds(terminals, part.type !== 'bus-bar' && part.type !== 'fuse-panel')
+      const slots: number[] = new Array(ids.length)
+      for (let i = 0; i < ids.length; i++) {
+        slots[i] = slotPart.length // the slot for now; replaced by the node below
+        slotPart.push(part.id)
+        slotTerminal.push(ids[i])
+      }
+      byPart.set(part.id, (entry = { ids, nodes: slots, terminals }))
+    } else {
+      entry.terminals = terminals // the last part with an id gives its terminal list
+      for (const t of terminals) {
+        if (entry.ids.includes(t.id)) continue
+        if (SHARED_IDS.has(entry.ids)) entry.ids = [...entry.ids] // own copy before adding to it
+        entry.ids.push(t.id)
+        entry.nodes.push(slotPart.length)
+        slotPart.push(part.id)
+        slotTerminal.push(t.id)
+      }
     }
-  })
+    entryAt[k] = entry
+  }
   const uf = new UnionFind(slotPart.length)
   for (let k = 0; k < design.parts.length; k++) {
     const part = design.parts[k]
@@ -121,21 +161,30 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
   const conductorTo = new Int32Array(count)
   const conductorFromPolarity: (TerminalInfo['polarity'] | undefined)[] = new Array(count)
   const conductorToPolarity: (TerminalInfo['polarity'] | undefined)[] = new Array(count)
-  // One part look-up per conductor end gives both the node and the polarity.
-  const end = (partId: string, terminal: string): [number, TerminalInfo['polarity'] | undefined] => {
-    const entry = byPart.get(partId)
-    if (!entry) return [-1, undefined]
-    const i = entry.ids.indexOf(terminal)
-    let polarity: TerminalInfo['polarity'] | undefined
-    for (const t of entry.terminals) if (t.id === terminal) { polarity = t.polarity; break }
-    return [i < 0 ? -1 : entry.nodes[i], polarity]
+  // One part look-up per conductor end gives both the node and the polarity (no tuple per end).
+  const conductors = design.conductors
+  for (let i = 0; i < count; i++) {
+    const c = conductors[i]
+    let entry = byPart.get(c.from.partId)
+    conductorFrom[i] = entry ? nodeIn(entry, c.from.terminal) : -1
+    conductorFromPolarity[i] = entry ? polarityIn(entry.terminals, c.from.terminal) : undefined
+    entry = byPart.get(c.to.partId)
+    conductorTo[i] = entry ? nodeIn(entry, c.to.terminal) : -1
+    conductorToPolarity[i] = entry ? polarityIn(entry.terminals, c.to.terminal) : undefined
   }
-  design.conductors.forEach((c, i) => {
-    ;[conductorFrom[i], conductorFromPolarity[i]] = end(c.from.partId, c.from.terminal)
-    ;[conductorTo[i], conductorToPolarity[i]] = end(c.to.partId, c.to.terminal)
-  })
-  const nodes = { nodeCount: nodeNames.length, nodeNames, terminalsOf, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity }
+  const nodes = { nodeCount: nodeNames.length, nodeNames, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity }
   let nodeOf: Map<string, number> | undefined
+  let terminalsOf: Map<string, TerminalInfo[]> | undefined
+  Object.defineProperty(nodes, 'terminalsOf', {
+    enumerable: true,
+    get: () => {
+      if (!terminalsOf) {
+        terminalsOf = new Map()
+        for (const [id, entry] of byPart) terminalsOf.set(id, entry.terminals)
+      }
+      return terminalsOf
+    },
+  })
   return Object.defineProperty(nodes, 'nodeOf', {
     enumerable: true,
     get: () => {

@@ -25,7 +25,7 @@ export const connectivityRule: Rule = {
       wire(c.to.partId, c.to.terminal)
     }
     for (const part of ctx.design.parts) {
-      const terminals = ctx.nodes.terminalsOf.get(part.id) ?? []
+      const terminals = ctx.nodes.byPart.get(part.id)?.terminals ?? []
       const onPart = wired.get(part.id) ?? []
       const open = terminals.filter((t) => !onPart.includes(t.id))
       if (open.length === terminals.length && terminals.length > 0) {
