@@ -79,7 +79,7 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
   const owners: ElementOwner[] = base.owners.slice()
   const partElementAt = base.partElementAt.slice()
   const problems: CompileProblem[] = base.problems.slice()
-  const { conductorElement, deviceElement, conductorElementAt, deviceElementAt, batteryNegNodes, arraysOfController } = base
+  const { conductorElementAt, deviceElementAt, batteryNegNodes, arraysOfController } = base
   const node = (partId: string, terminal: string) => nodeAt(nodes, partId, terminal)
   const add = (el: CircuitElement, owner: ElementOwner) => {
     elements.push(el)
@@ -189,10 +189,13 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
     setOwn(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: ns[2], neg: ns[3], powerW: -finite(outW), minVoltageV }, { kind: 'part', id: part.id, role: 'main' }))
   }
 
-  const compiled: Omit<CompiledCircuit, 'partElement'> = {
+  const compiled: Omit<CompiledCircuit, 'partElement' | 'conductorElement' | 'deviceElement'> = {
     circuit: { nodeCount: nodes.nodeCount, nodeNames: nodes.nodeNames, elements },
-    nodes, owners, conductorElement, deviceElement, conductorElementAt, partElementAt, deviceElementAt, batteryNegNodes, problems,
+    nodes, owners, conductorElementAt, partElementAt, deviceElementAt, batteryNegNodes, problems,
   }
+  // The passive circuit's id-keyed maps, read through (and so built) only when someone reads them.
+  Object.defineProperty(compiled, 'conductorElement', { enumerable: true, get: () => base.conductorElement })
+  Object.defineProperty(compiled, 'deviceElement', { enumerable: true, get: () => base.deviceElement })
   // The id-keyed view of partElementAt, built on first read (the analysis reads positions only).
   let partElement: Map<string, number> | undefined
   return Object.defineProperty(compiled, 'partElement', {

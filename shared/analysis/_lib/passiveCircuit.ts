@@ -11,10 +11,10 @@ import { UnionFind } from './unionFind'
 export interface PassiveCircuit {
   elements: CircuitElement[]
   owners: ElementOwner[]
-  conductorElement: Map<string, number>
-  partElement: Map<string, number>
-  deviceElement: Map<string, number>
-  /** The same by position: per conductor (design order), per part (design order), per device (list order); −1 none. */
+  /** Conductor id → its resistor, device id → its resistor (closed devices): built on first read from the arrays below. */
+  readonly conductorElement: Map<string, number>
+  readonly deviceElement: Map<string, number>
+  /** By position: per conductor (design order), per part (design order), per device (list order); −1 none. */
   conductorElementAt: Int32Array
   partElementAt: Int32Array
   deviceElementAt: Int32Array
@@ -31,9 +31,6 @@ export interface PassiveCircuit {
 export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, devices: ProtectiveDevice[]): PassiveCircuit {
   const elements: CircuitElement[] = []
   const owners: ElementOwner[] = []
-  const conductorElement = new Map<string, number>()
-  const partElement = new Map<string, number>()
-  const deviceElement = new Map<string, number>()
   const problems: CompileProblem[] = []
   const batteryNegNodes: number[] = []
   const conductorElementAt = new Int32Array(design.conductors.length).fill(-1)
@@ -57,14 +54,12 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
       return
     }
     const e = add({ kind: 'resistor', id: `c:${c.id}`, a, b, resistanceOhm: r }, { kind: 'conductor', id: c.id, role: 'main' })
-    conductorElement.set(c.id, e)
     conductorElementAt[k] = e
     series.union(a, b)
   })
   const partIndex = new Map<string, number>()
   design.parts.forEach((part, k) => partIndex.set(part.id, k))
   const setPartElement = (partId: string, e: number) => {
-    partElement.set(partId, e)
     partElementAt[partIndex.get(partId)!] = e
   }
   devices.forEach((d, k) => {
@@ -74,7 +69,6 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
     const role = d.kind === 'panel-way' ? d.id.slice(d.partId.length + 1) : 'main'
     const i = add({ kind: 'resistor', id: `p:${d.id}`, a, b, resistanceOhm: Math.max(d.resistanceOhm, 1e-6) }, { kind: 'part', id: d.partId, role })
     if (role === 'main') setPartElement(d.partId, i)
-    deviceElement.set(d.id, i)
     deviceElementAt[k] = i
     series.union(a, b)
   })
@@ -108,11 +102,30 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
   const hasBattery = new Uint8Array(nodes.nodeCount)
   for (const n of batteryNegNodes) hasBattery[suppliedRoot[n]] = 1
 
-  return {
-    elements, owners, conductorElement, partElement, deviceElement, conductorElementAt, partElementAt, deviceElementAt, partIndex,
+  const passive = {
+    elements, owners, conductorElementAt, partElementAt, deviceElementAt, partIndex,
     batteryNegNodes, problems, suppliedRoot, hasBattery,
     arraysOfController: pvArraysByController(design, nodes, series),
   }
+  // The id-keyed views (tests, references, tools) are built on first read; the analysis reads positions.
+  lazyIdMap(passive, 'conductorElement', design.conductors, conductorElementAt)
+  lazyIdMap(passive, 'deviceElement', devices, deviceElementAt)
+  return passive as typeof passive & Pick<PassiveCircuit, 'conductorElement' | 'deviceElement'>
+}
+
+/** Defines `key` on `target` as a Map id → element (items in order, −1 left out), built when first read. */
+function lazyIdMap(target: object, key: string, items: readonly { id: string }[], elementAt: Int32Array): void {
+  let map: Map<string, number> | undefined
+  Object.defineProperty(target, key, {
+    enumerable: true,
+    get: () => {
+      if (!map) {
+        map = new Map()
+        for (let k = 0; k < items.length; k++) if (elementAt[k] >= 0) map.set(items[k].id, elementAt[k])
+      }
+      return map
+    },
+  })
 }
 
 /** PV arrays whose positive reaches a controller's PV input through conductors and closed devices. */
