@@ -46,19 +46,36 @@ interface Pulse {
 
 /** A time-delay family stocked at this rating that carries the pulse and still protects the conductor, same size first. */
 function timeDelayAlternative(device: ProtectionDevice, pulse: Pulse, context: ResolvedContext): string | null {
-  const preferred = SAME_SIZE_TIME_DELAY[device.familyId]
-  const candidates = [preferred, ...DEVICE_FAMILY_IDS].filter((id): id is string => !!id && id !== device.familyId)
-  for (const familyId of candidates) {
-    if (!hasTimeCurrentModel(familyId)) continue
-    const band = deviceBand(familyId, device.ratingA)
-    // Thermal breakers ride through starts but cannot clear fast faults (see faultClearing.ts).
-    if (!band.timeDelay || band.kind === 'thermal-breaker') continue
-    if (!ratingsOf(familyId).includes(device.ratingA)) continue
+  for (const familyId of timeDelayCandidates(device.familyId, device.ratingA)) {
     if (!interruptsFault(familyId, device.faultCurrentAtDeviceA)) continue
     if (fits(device, familyId, device.ratingA, pulse, context)) return familyId
   }
   return null
 }
+
+/**
+ * The time-delay families (same size first) with a time-current model, stocked at `ratingA`, other
+ * than `familyId`: catalogue constants, so listed once per family and rating, not per load start.
+ */
+function timeDelayCandidates(familyId: string, ratingA: number): readonly string[] {
+  const key = `${familyId}|${ratingA}`
+  let list = CANDIDATES.get(key)
+  if (list) return list
+  list = []
+  const preferred = SAME_SIZE_TIME_DELAY[familyId]
+  for (const id of [preferred, ...DEVICE_FAMILY_IDS]) {
+    if (!id || id === familyId || !hasTimeCurrentModel(id)) continue
+    const band = deviceBand(id, ratingA)
+    // Thermal breakers ride through starts but cannot clear fast faults (see faultClearing.ts).
+    if (!band.timeDelay || band.kind === 'thermal-breaker') continue
+    if (!ratingsOf(id).includes(ratingA)) continue
+    list.push(id)
+  }
+  if (CANDIDATES.size >= 2000) CANDIDATES.clear()
+  CANDIDATES.set(key, list)
+  return list
+}
+const CANDIDATES = new Map<string, string[]>()
 
 /** The smallest higher rating of the same family, within what the conductor allows, that carries the pulse and still protects it. */
 function nextRatingThatRides(device: ProtectionDevice, pulse: Pulse, context: ResolvedContext): number | null {
