@@ -94,13 +94,12 @@ function pvRole(
   c: Conductor, feedingArrayId: string | null, arrayById: Map<string, PartOf<'pv-array'>>,
   groupOfArray: Map<string, PvGroup>, controllerGroup: Map<string, PvGroup>,
 ): ConductorStats['pv'] {
-  for (const end of [c.from, c.to]) {
-    const own = arrayById.get(end.partId)
-    if (own) return { arrays: [own], strings: own.params.strings }
-  }
-  const group =
-    (feedingArrayId ? groupOfArray.get(feedingArrayId) : undefined) ??
-    [c.from, c.to].map((end) => (end.terminal === 'pv-neg' || end.terminal === 'pv-pos' ? controllerGroup.get(end.partId) : undefined)).find(Boolean)
+  // No arrays wired to a controller (most designs): no conductor has a PV role; no look-ups per conductor.
+  if (arrayById.size === 0 && controllerGroup.size === 0) return null
+  const own = arrayById.get(c.from.partId) ?? arrayById.get(c.to.partId)
+  if (own) return { arrays: [own], strings: own.params.strings }
+  const pvEnd = (end: Conductor['from']) => (end.terminal === 'pv-neg' || end.terminal === 'pv-pos' ? controllerGroup.get(end.partId) : undefined)
+  const group = (feedingArrayId ? groupOfArray.get(feedingArrayId) : undefined) ?? pvEnd(c.from) ?? pvEnd(c.to)
   if (!group) return null
   return { arrays: group.arrays, strings: group.arrays.reduce((s, a) => s + a.params.strings, 0) }
 }
