@@ -1,9 +1,16 @@
+import type { Conductor } from '../../design/schema'
 import { makeFinding } from '../findings'
 import type { Finding } from '../types'
 import type { Rule } from './types'
 
 /** Parts whose every terminal must be wired to work at all. */
 const ALL_TERMINALS_NEEDED = new Set(['battery', 'load', 'inverter', 'fuse', 'breaker', 'battery-switch', 'shunt', 'mains-charger', 'pv-array'])
+
+/** A conductor of `at` ends on this terminal of the part. */
+function isWired(at: readonly Conductor[] | undefined, partId: string, terminal: string): boolean {
+  if (at) for (const c of at) if ((c.from.partId === partId && c.from.terminal === terminal) || (c.to.partId === partId && c.to.terminal === terminal)) return true
+  return false
+}
 
 /** Floating parts (nothing wired) and open terminals, named so the designer can find them. */
 export const connectivityRule: Rule = {
@@ -13,21 +20,14 @@ export const connectivityRule: Rule = {
   source: 'Circuit model (every terminal is a node); common practice',
   run(ctx) {
     const findings: Finding[] = []
-    // Part id → its terminals with a conductor on them.
-    const wired = new Map<string, string[]>()
-    const wire = (partId: string, terminal: string) => {
-      const list = wired.get(partId)
-      if (list) list.push(terminal)
-      else wired.set(partId, [terminal])
-    }
-    for (const c of ctx.design.conductors) {
-      wire(c.from.partId, c.from.terminal)
-      wire(c.to.partId, c.to.terminal)
-    }
     for (const part of ctx.design.parts) {
       const terminals = ctx.nodes.byPart.get(part.id)?.terminals ?? []
-      const onPart = wired.get(part.id) ?? []
-      const open = terminals.filter((t) => !onPart.includes(t.id))
+      // The conductors at this part (the analysis lists them once per part): a terminal is wired when one ends on it.
+      const at = ctx.conductorsAtPart.get(part.id)
+      let openCount = 0
+      for (const t of terminals) if (!isWired(at, part.id, t.id)) openCount++
+      if (openCount === 0) continue // the usual case: no list built
+      const open = terminals.filter((t) => !isWired(at, part.id, t.id))
       if (open.length === terminals.length && terminals.length > 0) {
         findings.push(makeFinding({ ruleId: this.id, severity: 'warning', title: 'Part not connected', partIds: [part.id], conductorIds: [],
           message: `${part.label || part.id} has no conductor on any terminal; it takes no part in the analysis.`, source: this.source }))
