@@ -160,6 +160,9 @@ export function stampConductance(system: NodalSystem, e: number, g: number): voi
   if (slotPQ[e] >= 0) ax[slotPQ[e]] -= g
 }
 
+/** Columns up to this length are searched directly; longer ones (a hub node's) through pairSlots. */
+const SHORT_COLUMN = 16
+
 /** Slot of every off-diagonal (row, column) pair of a system's pattern, keyed row · n + column. */
 const PAIR_SLOTS = new WeakMap<NodalSystem, Map<number, number>>()
 function pairSlots(system: NodalSystem): Map<number, number> {
@@ -192,7 +195,8 @@ export function reuseNodalSystem(
   const slotPP = new Int32Array(m).fill(-1)
   const slotQQ = new Int32Array(m).fill(-1)
   const slotPQ = new Int32Array(m).fill(-1)
-  const slots = pairSlots(previous)
+  const { ai } = previous
+  let slots: Map<number, number> | undefined // only for long columns (hub nodes), built on first need
   for (let e = 0; e < m; e++) {
     if (!stamps[e]) continue
     const p = firstNode(elements[e])
@@ -203,8 +207,14 @@ export function reuseNodalSystem(
     if (a >= 0) slotPP[e] = ap[a]
     if (b >= 0) slotQQ[e] = ap[b]
     if (a >= 0 && b >= 0 && a !== b) {
-      const slot = slots.get(a < b ? a * n + b : b * n + a)
-      if (slot === undefined) return null
+      // The pair's slot is in column max(a, b), row min(a, b): a short column is scanned in place.
+      const row = a < b ? a : b
+      const col = a < b ? b : a
+      let slot = -1
+      if (ap[col + 1] - ap[col] <= SHORT_COLUMN) {
+        for (let k = ap[col] + 1; k < ap[col + 1]; k++) if (ai[k] === row) { slot = k; break }
+      } else slot = (slots ??= pairSlots(previous)).get(row * n + col) ?? -1
+      if (slot < 0) return null
       slotPQ[e] = slot
     }
   }
