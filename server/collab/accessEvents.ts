@@ -8,6 +8,8 @@ export type AccessChange =
   | { kind: 'memberRole'; organizationId: string; userId: string; role: Role }
   | { kind: 'memberRemoved'; organizationId: string; userId: string }
   | { kind: 'projectShareRemoved'; projectId: string; userId: string }
+  /** Signed out: the connections opened with that session end with 4401. */
+  | { kind: 'sessionEnded'; userId: string; sessionId: string }
 
 export interface AccessEvents {
   emit(change: AccessChange): void

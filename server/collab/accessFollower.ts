@@ -1,4 +1,5 @@
-// Open connections follow member and share changes at once: a removed member or a lost share closes
+// Open connections follow member, share and session changes at once: a sign-out closes the connections
+// opened with that session (4401); a removed member or a lost share closes
 // the connection with 4403; a new role rewrites the connection's rights before the next message is
 // read (a designer made reviewer has every later update dropped) and the client is told. Whether a
 // new role still sees the project (a client needs a share) is checked against the database.
@@ -43,6 +44,9 @@ function follow(db: Db, peer: LivePeer, change: AccessChange): void {
       return
     case 'memberRole':
       if (access.organizationId === change.organizationId) applyRole(db, peer, change.role)
+      return
+    case 'sessionEnded':
+      if (access.sessionId === change.sessionId) peer.close(COLLAB_CLOSE.sessionEnded, CLOSE_MESSAGES.sessionEnded)
       return
     case 'projectShareRemoved':
       // Roles that see every project of the organisation do not depend on a share.

@@ -23,6 +23,8 @@ export interface CollabAccess {
   readOnly: boolean
   /** When the session ends (the connection is closed with 4401 then). */
   expiresAt: Date
+  /** The session the connection was opened with: signing out closes it (4401). */
+  sessionId: string
 }
 
 export type UpgradeCheck =
@@ -100,6 +102,7 @@ export async function authenticateUpgrade(deps: { db: Db; config: AppConfig }, r
       role: auth.role,
       readOnly: !can(auth.role, 'design.write'),
       expiresAt: auth.expiresAt,
+      sessionId: auth.sessionId,
     },
   }
 }

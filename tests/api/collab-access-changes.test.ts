@@ -1,6 +1,7 @@
 // Open /collab connections follow member and share changes made through the API at once (raw sockets,
 // the real PostgreSQL): a demoted designer's later updates are dropped and not stored; a removed member,
-// a client whose share was removed, and a member made client without a share are closed with 4403.
+// a client whose share was removed, and a member made client without a share are closed with 4403;
+// signing out closes the connections opened with that session (4401), not the user's other sessions.
 import { count, eq } from 'drizzle-orm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import * as Y from 'yjs'
@@ -129,5 +130,25 @@ describe('lost access closes open connections with 4403', () => {
     await Promise.all([elsewhere.flush(), reviewer.flush()])
     expect(elsewhere.closed).toBe(false)
     expect(reviewer.closed).toBe(false)
+  })
+})
+
+describe('signing out closes the connections of that session', () => {
+  it("closes with 4401 the connection opened with the signed-out session; the user's other session stays open", async () => {
+    const projectId = await createProject(server.db, org, { document: createDemoDesign() })
+    const member = await createMember(server.db, org.id, 'designer', 'signing-out-designer')
+    const laptop = await freshSessionClient(server, { userId: member.id, organizationId: org.id })
+    const tablet = await freshSessionClient(server, { userId: member.id, organizationId: org.id })
+    const onLaptop = await RawCollabClient.open(server.baseUrl, projectId, laptop.cookie!)
+    const onTablet = await RawCollabClient.open(server.baseUrl, projectId, tablet.cookie!)
+    open.push(onLaptop, onTablet)
+    await Promise.all([onLaptop.flush(), onTablet.flush()])
+
+    expect((await laptop.post('/api/auth/logout', {})).status).toBe(204)
+    await waitFor(() => onLaptop.closed, 'the signed-out connection to close')
+    expect(onLaptop.closeCode).toBe(COLLAB_CLOSE.sessionEnded)
+    expect(onLaptop.closeReason).toBe('Your session has ended. Sign in again.')
+    await onTablet.flush()
+    expect(onTablet.closed).toBe(false)
   })
 })

@@ -32,7 +32,9 @@ export function authRoutes(deps: RouteDeps): Router {
   })
 
   router.post('/logout', deps.requireSession, async (req, res) => {
-    await deleteSession(deps.db, authOf(req).sessionId)
+    const { sessionId, user } = authOf(req)
+    await deleteSession(deps.db, sessionId)
+    deps.hub.access.emit({ kind: 'sessionEnded', userId: user.id, sessionId })
     clearSessionCookie(res, deps.config)
     res.status(204).end()
   })
