@@ -4,63 +4,29 @@
 // set to the library device in the part inspector, and the saved design must carry the copy
 // (params.customDevice) with the device's rating; the motor-start finding of the blade band is gone,
 // the chart draws the library band, and "Back to a generic family" brings the finding back.
-import fs from 'node:fs'
-import os from 'node:os'
 import path from 'node:path'
-import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { motorStartNuisance } from '../../server/cli/examples/timeCurrent'
-import { startTestServer, type TestServer } from '../helpers/server'
-import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
+import { INKED_SHARE, SCREENSHOTS_DIR } from '../helpers/browser'
+import { startBrowserSession, type BrowserSession } from '../helpers/browserSession'
 
-const ROOT = path.resolve(import.meta.dirname, '../..')
-let server: TestServer
-let context: BrowserContext
+let session: BrowserSession
 let page: Page
-let profileDir: string
-const pageErrors: string[] = []
-const serverErrors: string[] = []
 const suffix = Math.random().toString(36).slice(2, 8)
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 150 })
-
-async function api(method: 'post' | 'get' | 'put', url: string, data?: unknown) {
-  const res = await page.request[method](`${server.baseUrl}/api${url}`, { headers: { Origin: server.baseUrl }, data })
-  expect(res.ok(), `${method} ${url} → ${res.status()} ${await res.text()}`).toBe(true)
-  return res.json()
-}
-
-/** Share of the chart canvas's pixels that are not white (the plot drawn). Runs in the page. */
-const INKED_SHARE = `(() => {
-  const c = document.querySelector('[data-test="time-current-canvas"]')
-  const { data } = c.getContext('2d').getImageData(0, 0, c.width, c.height)
-  let inked = 0
-  for (let i = 0; i < data.length; i += 4) if (data[i] < 235 || data[i + 1] < 235 || data[i + 2] < 235) inked++
-  return inked / (data.length / 4)
-})()`
+const api: BrowserSession['api'] = (...args) => session.api(...args)
 
 beforeAll(async () => {
-  if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) throw new Error('no client build: run `npx vite build` first')
-  fs.mkdirSync(SCREENSHOTS_DIR, { recursive: true })
-  server = await startTestServer({ serveClient: true })
-  profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-libdev-'))
-  context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS, viewport: { width: 1440, height: 900 },
-  })
-  page = context.pages()[0] ?? (await context.newPage())
-  page.on('pageerror', (err) => pageErrors.push(err.message))
-  page.on('response', (res) => {
-    if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
-  })
-  await page.goto(server.baseUrl)
+  session = await startBrowserSession({ viewport: { width: 1440, height: 900 } })
+  page = session.page
   await api('post', '/auth/signup', {
     name: 'Rune Maelstad', email: `rune.${suffix}@maelstad-fitout.test`, password: 'crimp-then-solder', organizationName: `Maelstad Fit-out ${suffix}`,
   })
 })
 
 afterAll(async () => {
-  await context?.close()
-  await server?.close()
-  if (profileDir) fs.rmSync(profileDir, { recursive: true, force: true })
+  await session?.close()
 })
 
 describe('a library device in a design', () => {
@@ -87,7 +53,7 @@ describe('a library device in a design', () => {
     const { revision } = await api('get', `/projects/${project.id}/design`)
     await api('put', `/projects/${project.id}/design`, { design: motorStartNuisance(), baseRevision: revision })
 
-    await page.goto(`${server.baseUrl}/projects/${project.id}/design`)
+    await page.goto(`${session.server.baseUrl}/projects/${project.id}/design`)
     await page.locator('.editor-canvas').waitFor()
     await page.locator('.vue-flow__node[data-id="branch-device"]').click()
     const inspector = page.locator('.part-inspector[data-part-id="branch-device"]')
@@ -139,7 +105,7 @@ describe('a library device in a design', () => {
       return 'customDevice' in design.parts.find((p: { id: string }) => p.id === 'branch-device').params
     }).toBe(false)
 
-    expect(pageErrors).toEqual([])
-    expect(serverErrors).toEqual([])
+    expect(session.pageErrors).toEqual([])
+    expect(session.serverErrors).toEqual([])
   })
 })

@@ -24,12 +24,24 @@ export interface BrowserSession {
   close(): Promise<void>
 }
 
-export async function startBrowserSession(options: { clientDir: string; viewport?: { width: number; height: number } }): Promise<BrowserSession> {
-  if (!fs.existsSync(path.join(options.clientDir, 'index.html'))) {
-    throw new Error(`no client build in ${options.clientDir}: run \`npx vite build\` first`)
+export interface BrowserSessionOptions {
+  /** The built client; a path without dot-folders (the server will not send from those). */
+  clientDir?: string
+  viewport?: { width: number; height: number }
+  /** A server another session started: a second person's page shares it and leaves it running at close. */
+  server?: TestServer
+}
+
+/** The client `npx vite build` made, unless AMPWRIGHT_CLIENT_DIR names one built elsewhere. */
+export const CLIENT_DIR = process.env.AMPWRIGHT_CLIENT_DIR ?? path.resolve(import.meta.dirname, '../../dist')
+
+export async function startBrowserSession(options: BrowserSessionOptions = {}): Promise<BrowserSession> {
+  const clientDir = options.clientDir ?? CLIENT_DIR
+  if (!fs.existsSync(path.join(clientDir, 'index.html'))) {
+    throw new Error(`no client build in ${clientDir}: run \`npx vite build\` first`)
   }
   fs.mkdirSync(SCREENSHOTS_DIR, { recursive: true })
-  const server = await startTestServer({ serveClient: true, config: { clientDir: options.clientDir } })
+  const server = options.server ?? (await startTestServer({ serveClient: true, config: { clientDir } }))
   const profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-browser-'))
   const context = await chromium.launchPersistentContext(profileDir, {
     executablePath: CHROMIUM_PATH,
@@ -59,7 +71,7 @@ export async function startBrowserSession(options: { clientDir: string; viewport
     shot: (name) => page.screenshot({ path: path.join(SCREENSHOTS_DIR, `${name}.png`) }),
     async close() {
       await context.close()
-      await server.close()
+      if (!options.server) await server.close()
       fs.rmSync(profileDir, { recursive: true, force: true })
     },
   }
