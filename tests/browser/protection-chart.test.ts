@@ -3,65 +3,32 @@
 // is loaded through the API, the fuse panel feeding the pump is selected in the editor and its chart
 // opened; the canvas must be drawn, the PNG export must give a PNG, and no page error may occur.
 import fs from 'node:fs'
-import os from 'node:os'
 import path from 'node:path'
-import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { createDemoDesign } from '../../shared/design/demo'
-import { startTestServer, type TestServer } from '../helpers/server'
-import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
+import { INKED_SHARE, SCREENSHOTS_DIR } from '../helpers/browser'
+import { startBrowserSession, type BrowserSession } from '../helpers/browserSession'
 
-const ROOT = path.resolve(import.meta.dirname, '../..')
 const SHOTS = SCREENSHOTS_DIR
 
-let server: TestServer
-let context: BrowserContext
+let session: BrowserSession
 let page: Page
-let profileDir: string
-const pageErrors: string[] = []
-const serverErrors: string[] = []
 const suffix = Math.random().toString(36).slice(2, 8)
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000, interval: 100 })
+const api: BrowserSession['api'] = (...args) => session.api(...args)
 
-async function api(method: 'post' | 'get' | 'put', url: string, data?: unknown) {
-  const res = await page.request[method](`${server.baseUrl}/api${url}`, { headers: { Origin: server.baseUrl }, data })
-  expect(res.ok(), `${method} ${url} → ${res.status()} ${await res.text()}`).toBe(true)
-  return res.json()
-}
-
-/** Share of the canvas's pixels that are not white (the plot, its lines and labels). Runs in the page. */
-const INKED_SHARE = `(() => {
-  const c = document.querySelector('[data-test="time-current-canvas"]')
-  const ctx = c.getContext('2d')
-  const { data } = ctx.getImageData(0, 0, c.width, c.height)
-  let inked = 0
-  for (let i = 0; i < data.length; i += 4) if (data[i] < 235 || data[i + 1] < 235 || data[i + 2] < 235) inked++
-  return inked / (data.length / 4)
-})()`
-
+// Persistent contexts accept downloads by default: the PNG export below relies on it.
 beforeAll(async () => {
-  if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) throw new Error('no client build: run `npx vite build` first')
-  fs.mkdirSync(SHOTS, { recursive: true })
-  server = await startTestServer({ serveClient: true })
-  profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-tcc-'))
-  context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS, viewport: { width: 1440, height: 900 }, acceptDownloads: true,
-  })
-  page = context.pages()[0] ?? (await context.newPage())
-  page.on('pageerror', (err) => pageErrors.push(err.message))
-  page.on('response', (res) => {
-    if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
-  })
-  await page.goto(server.baseUrl)
+  session = await startBrowserSession({ viewport: { width: 1440, height: 900 } })
+  page = session.page
   await api('post', '/auth/signup', {
     name: 'Odile Brack', email: `odile.${suffix}@brack-marine.test`, password: 'heat-shrink-and-lugs', organizationName: `Brack Mobile Power ${suffix}`,
   })
 })
 
 afterAll(async () => {
-  await context?.close()
-  await server?.close()
-  if (profileDir) fs.rmSync(profileDir, { recursive: true, force: true })
+  await session?.close()
 })
 
 describe('time-current chart in the editor', () => {
@@ -70,7 +37,7 @@ describe('time-current chart in the editor', () => {
     const { revision } = await api('get', `/projects/${project.id}/design`)
     await api('put', `/projects/${project.id}/design`, { design: createDemoDesign(), baseRevision: revision })
 
-    await page.goto(`${server.baseUrl}/projects/${project.id}/design`)
+    await page.goto(`${session.server.baseUrl}/projects/${project.id}/design`)
     await page.locator('.editor-canvas').waitFor()
     await page.locator('.vue-flow__node[data-id="panel"]').click()
     const open = page.locator('[data-test="open-time-current"]')
@@ -104,14 +71,14 @@ describe('time-current chart in the editor', () => {
     expect([...png.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])
     fs.copyFileSync(file, path.join(SHOTS, 'time-current-motor-circuit-export.png'))
 
-    expect(pageErrors).toEqual([])
-    expect(serverErrors).toEqual([])
+    expect(session.pageErrors).toEqual([])
+    expect(session.serverErrors).toEqual([])
   })
 })
 
 describe('device library in the browser', () => {
   it('adds a device from datasheet points with a live band preview, flagging a bad point at its cell', async () => {
-    await page.goto(`${server.baseUrl}/devices`)
+    await page.goto(`${session.server.baseUrl}/devices`)
     await page.locator('[data-test="add-device"]').click()
     const form = page.locator('[data-test="device-form"]')
     await form.waitFor()
@@ -133,7 +100,7 @@ describe('device library in the browser', () => {
     await form.locator('[data-test="save-device"]').click()
     await poll(() => page.locator('[data-test="devices-table"]').textContent()).toContain('Workshop strip fuse 20 A')
     expect(await page.locator('[data-test="devices-table"]').textContent()).toContain('20 A')
-    expect(pageErrors).toEqual([])
-    expect(serverErrors).toEqual([])
+    expect(session.pageErrors).toEqual([])
+    expect(session.serverErrors).toEqual([])
   })
 })
