@@ -1,37 +1,21 @@
 // The design editor end to end in Debian's chromium against the real server and the built client:
 // build battery → fuse → load by drag and drop and wiring, see the under-rated fuse flagged, fix it
 // in the side form, undo brings the finding back; then the demo system with screenshots.
-import fs from 'node:fs'
-import os from 'node:os'
-import path from 'node:path'
-import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core'
+import type { Locator, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { startTestServer, type TestServer } from '../helpers/server'
-import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
+import { startBrowserSession, type BrowserSession } from '../helpers/browserSession'
 
-const ROOT = path.resolve(import.meta.dirname, '../..')
-const SHOTS = SCREENSHOTS_DIR
-
-let server: TestServer
-let context: BrowserContext
+let session: BrowserSession
 let page: Page
-let profileDir: string
-const pageErrors: string[] = []
-const serverErrors: string[] = []
 
 const suffix = Math.random().toString(36).slice(2, 8)
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000, interval: 100 })
-const shot = (name: string) => page.screenshot({ path: path.join(SHOTS, `${name}.png`) })
-
-async function api(method: 'post' | 'get', url: string, data?: unknown) {
-  const res = await page.request[method](`${server.baseUrl}/api${url}`, { headers: { Origin: server.baseUrl }, data })
-  expect(res.ok(), `${method} ${url} → ${res.status()} ${await res.text()}`).toBe(true)
-  return res.json()
-}
+const shot = (name: string) => session.shot(name)
+const api: BrowserSession['api'] = (...args) => session.api(...args)
 
 async function openNewProjectDesign(name: string): Promise<string> {
   const project = await api('post', '/projects', { name, installationKind: 'vehicle', nominalVoltageV: 24 })
-  await page.goto(`${server.baseUrl}/projects/${project.id}`)
+  await page.goto(`${session.server.baseUrl}/projects/${project.id}`)
   await page.locator('[data-test="open-design"]').click()
   await page.waitForURL(/\/design$/)
   await page.locator('.editor-canvas').waitFor()
@@ -68,23 +52,9 @@ const findingRows = () => page.locator('.findings-table tbody tr[data-row-id]')
 const fuseFindings = () => findingRows().filter({ hasText: 'Fuse 1' }).filter({ hasText: /Device (will open under normal load|rated below the load)/ })
 
 beforeAll(async () => {
-  if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) throw new Error('no client build: run `npx vite build` first')
-  fs.mkdirSync(SHOTS, { recursive: true })
-  server = await startTestServer({ serveClient: true })
-  profileDir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-editor-'))
-  context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: CHROMIUM_PATH,
-    headless: true,
-    args: CHROMIUM_ARGS,
-    // The smallest screen the editor is laid out for.
-    viewport: { width: 1280, height: 720 },
-  })
-  page = context.pages()[0] ?? (await context.newPage())
-  page.on('pageerror', (err) => pageErrors.push(err.message))
-  page.on('response', (res) => {
-    if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
-  })
-  await page.goto(server.baseUrl)
+  // The default 1280×720 viewport: the smallest screen the editor is laid out for.
+  session = await startBrowserSession()
+  page = session.page
   await api('post', '/auth/signup', {
     name: 'Ines Harrow',
     email: `ines.${suffix}@harrow-vans.test`,
@@ -94,9 +64,7 @@ beforeAll(async () => {
 })
 
 afterAll(async () => {
-  await context?.close()
-  await server?.close()
-  if (profileDir) fs.rmSync(profileDir, { recursive: true, force: true })
+  await session?.close()
 })
 
 describe('design editor in the browser', () => {
@@ -180,7 +148,7 @@ describe('design editor in the browser', () => {
     await poll(() => page.getByText('Keyboard and mouse').isVisible()).toBe(true)
     await shot('editor-shortcuts')
     await page.keyboard.press('Escape')
-    expect(pageErrors).toEqual([])
-    expect(serverErrors).toEqual([])
+    expect(session.pageErrors).toEqual([])
+    expect(session.serverErrors).toEqual([])
   })
 })
