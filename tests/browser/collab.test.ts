@@ -1,46 +1,24 @@
 // Live co-editing in two chromium pages against the real server, the built client and the real
 // /collab endpoint: a designer's edit appears on a reviewer's page, each sees the other in the
 // presence strip, and the reviewer's page offers no editing.
-import fs from 'node:fs'
-import os from 'node:os'
 import path from 'node:path'
-import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { startTestServer, type TestServer } from '../helpers/server'
+import type { TestServer } from '../helpers/server'
 import { TEST_PASSWORD, createOrganization, createProject, type TestOrganization, type TestUser } from '../helpers/factories'
-import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
-
-const ROOT = path.resolve(import.meta.dirname, '../..')
-const SHOTS = SCREENSHOTS_DIR
+import { SCREENSHOTS_DIR } from '../helpers/browser'
+import { startSharedServerSessions, type SharedServerSessions } from '../helpers/browserSession'
 
 let server: TestServer
 let organization: TestOrganization
 let projectId: string
-const contexts: BrowserContext[] = []
-const profileDirs: string[] = []
-const pageErrors: string[] = []
+let people: SharedServerSessions
 
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000, interval: 100 })
 
-/** A signed-in page of its own browser profile (its own session cookie). */
+/** A signed-in page of its own browser profile (its own session cookie), on the design. */
 async function openAs(user: TestUser): Promise<Page> {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-collab-'))
-  profileDirs.push(dir)
-  const context = await chromium.launchPersistentContext(dir, {
-    executablePath: CHROMIUM_PATH,
-    headless: true,
-    args: CHROMIUM_ARGS,
-    viewport: { width: 1280, height: 720 },
-  })
-  contexts.push(context)
-  const page = context.pages()[0] ?? (await context.newPage())
-  page.on('pageerror', (err) => pageErrors.push(`${user.role}: ${err.message}`))
-  await page.goto(server.baseUrl)
-  const res = await page.request.post(`${server.baseUrl}/api/auth/login`, {
-    headers: { Origin: server.baseUrl },
-    data: { email: user.email, password: TEST_PASSWORD },
-  })
-  expect(res.ok(), `login ${user.role} → ${res.status()} ${await res.text()}`).toBe(true)
+  const { page } = await people.signIn(user.role, { email: user.email, password: TEST_PASSWORD })
   await page.goto(`${server.baseUrl}/projects/${projectId}/design`)
   await page.locator('.editor-canvas').waitFor()
   return page
@@ -49,17 +27,14 @@ async function openAs(user: TestUser): Promise<Page> {
 const nodes = (page: Page) => page.locator('.vue-flow__node')
 
 beforeAll(async () => {
-  if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) throw new Error('no client build: run `npx vite build` first')
-  fs.mkdirSync(SHOTS, { recursive: true })
-  server = await startTestServer({ serveClient: true })
+  people = await startSharedServerSessions()
+  server = people.server
   organization = await createOrganization(server.db, 'Collab')
   projectId = await createProject(server.db, organization)
 })
 
 afterAll(async () => {
-  for (const context of contexts) await context.close()
-  await server?.close()
-  for (const dir of profileDirs) fs.rmSync(dir, { recursive: true, force: true })
+  await people?.close()
 })
 
 describe('two people on one design', () => {
@@ -92,8 +67,8 @@ describe('two people on one design', () => {
     expect(await nodes(reviewer).count()).toBe(before + 1)
     expect(await nodes(designer).count()).toBe(before + 1)
 
-    await designer.screenshot({ path: path.join(SHOTS, 'collab-designer.png') })
-    await reviewer.screenshot({ path: path.join(SHOTS, 'collab-reviewer.png') })
+    await designer.screenshot({ path: path.join(SCREENSHOTS_DIR, 'collab-designer.png') })
+    await reviewer.screenshot({ path: path.join(SCREENSHOTS_DIR, 'collab-reviewer.png') })
 
     // The designer names a revision; it is listed with its author, and the reviewer sees it too
     // (without the naming form or restore).
@@ -118,12 +93,12 @@ describe('two people on one design', () => {
     }
     await designer.getByRole('button', { name: 'Compare' }).click()
     await poll(() => designer.locator('[data-testid="revision-comparison"]').textContent()).toContain('Parts added (1)')
-    await designer.screenshot({ path: path.join(SHOTS, 'collab-revisions.png') })
+    await designer.screenshot({ path: path.join(SCREENSHOTS_DIR, 'collab-revisions.png') })
     await reviewer.locator('[data-testid="open-revisions"]').click()
     await poll(() => reviewer.locator('[data-testid="revision-list"] .v-list-item').filter({ hasText: 'Issued for review' }).count()).toBe(1)
     expect(await reviewer.locator('[data-testid="revision-name"]').count()).toBe(0)
     expect(await reviewer.getByRole('button', { name: 'Restore' }).count()).toBe(0)
 
-    expect(pageErrors).toEqual([])
+    expect(people.pageErrors()).toEqual([])
   })
 })

@@ -76,3 +76,32 @@ export async function startBrowserSession(options: BrowserSessionOptions = {}): 
     },
   }
 }
+
+/** Several people's pages on one server, each in a profile of its own (its own session cookie). */
+export interface SharedServerSessions {
+  server: TestServer
+  /** A page signed in with these credentials; `label` (e.g. the user's role) marks its page errors. */
+  signIn(label: string, credentials: { email: string; password: string }): Promise<BrowserSession>
+  /** Every page's uncaught errors, each as `<label>: <message>`. */
+  pageErrors(): string[]
+  close(): Promise<void>
+}
+
+export async function startSharedServerSessions(options: Omit<BrowserSessionOptions, 'server'> = {}): Promise<SharedServerSessions> {
+  const server = await startTestServer({ serveClient: true, config: { clientDir: options.clientDir ?? CLIENT_DIR } })
+  const opened: { label: string; session: BrowserSession }[] = []
+  return {
+    server,
+    async signIn(label, credentials) {
+      const session = await startBrowserSession({ ...options, server })
+      opened.push({ label, session })
+      await session.api('post', '/auth/login', credentials)
+      return session
+    },
+    pageErrors: () => opened.flatMap(({ label, session }) => session.pageErrors.map((message) => `${label}: ${message}`)),
+    async close() {
+      for (const { session } of opened) await session.close()
+      await server.close()
+    },
+  }
+}
