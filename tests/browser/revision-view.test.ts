@@ -3,54 +3,38 @@
 // schedules) under a label naming it, its time and author; a reviewer gets no restore, a designer
 // restores it and is back on the live design. Then an owner demotes that designer: the open design
 // page says the role changed instead of staying "Live" (the server's notice on the open connection).
-import fs from 'node:fs'
-import os from 'node:os'
 import path from 'node:path'
-import { chromium, type BrowserContext, type Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { createDemoDesign } from '../../shared/design/demo'
-import { startTestServer, type TestServer } from '../helpers/server'
+import type { TestServer } from '../helpers/server'
 import { freshSessionClient } from '../helpers/http'
 import { TEST_PASSWORD, createMember, createOrganization, createProject, type TestOrganization, type TestUser } from '../helpers/factories'
-import { CHROMIUM_ARGS, CHROMIUM_PATH, SCREENSHOTS_DIR } from '../helpers/browser'
-
-const ROOT = path.resolve(import.meta.dirname, '../..')
+import { SCREENSHOTS_DIR } from '../helpers/browser'
+import { startSharedServerSessions, type SharedServerSessions } from '../helpers/browserSession'
 
 let server: TestServer
 let organization: TestOrganization
 let projectId: string
-const contexts: BrowserContext[] = []
-const profileDirs: string[] = []
-const pageErrors: string[] = []
+let people: SharedServerSessions
 
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000, interval: 100 })
 const nodes = (page: Page) => page.locator('.vue-flow__node')
 
+/** A signed-in page of its own browser profile (its own session cookie). */
 async function signedInPage(user: TestUser): Promise<Page> {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'aw-revision-'))
-  profileDirs.push(dir)
-  const context = await chromium.launchPersistentContext(dir, { executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS, viewport: { width: 1280, height: 760 } })
-  contexts.push(context)
-  const page = context.pages()[0] ?? (await context.newPage())
-  page.on('pageerror', (err) => pageErrors.push(`${user.role}: ${err.message}`))
-  await page.goto(server.baseUrl)
-  const res = await page.request.post(`${server.baseUrl}/api/auth/login`, { headers: { Origin: server.baseUrl }, data: { email: user.email, password: TEST_PASSWORD } })
-  expect(res.ok(), `login ${user.role} → ${res.status()}`).toBe(true)
-  return page
+  return (await people.signIn(user.role, { email: user.email, password: TEST_PASSWORD })).page
 }
 
 beforeAll(async () => {
-  if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) throw new Error('no client build: run `npx vite build` first')
-  fs.mkdirSync(SCREENSHOTS_DIR, { recursive: true })
-  server = await startTestServer({ serveClient: true })
+  people = await startSharedServerSessions({ viewport: { width: 1280, height: 760 } })
+  server = people.server
   organization = await createOrganization(server.db, 'Revision view')
   projectId = await createProject(server.db, organization, { name: 'Sailboat refit', document: createDemoDesign() })
 })
 
 afterAll(async () => {
-  for (const context of contexts) await context.close()
-  await server?.close()
-  for (const dir of profileDirs) fs.rmSync(dir, { recursive: true, force: true })
+  await people?.close()
 })
 
 describe('a revision, read-only', () => {
@@ -99,7 +83,7 @@ describe('a revision, read-only', () => {
     await poll(() => new URL(designer.url()).pathname).toBe(`/projects/${projectId}/design`)
     await poll(() => nodes(designer).count()).toBe(revisionParts)
     await poll(() => designer.locator('[data-testid="connection-state"]').getAttribute('data-state')).toBe('live')
-    expect(pageErrors).toEqual([])
+    expect(people.pageErrors()).toEqual([])
   })
 
   it('an open design page explains a role change and a removal instead of staying live', async () => {
@@ -119,6 +103,6 @@ describe('a revision, read-only', () => {
     await poll(() => page.locator('[data-testid="connection-state"]').getAttribute('data-state')).toBe('accessRemoved')
     expect(await banner.textContent()).toContain('You no longer have access to this design')
     await page.screenshot({ path: path.join(SCREENSHOTS_DIR, 'collab-access-removed.png') })
-    expect(pageErrors).toEqual([])
+    expect(people.pageErrors()).toEqual([])
   })
 })
