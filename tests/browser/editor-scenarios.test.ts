@@ -1,17 +1,12 @@
 // Scenarios and the bottom panel in Debian's chromium against the real server and a built client:
 // add a scenario, rename it, turn a load off, show it and see findings and currents follow, undo;
 // then a generated 500-part design whose tables draw only the rows in view. Screenshots at 1280×720.
-import path from 'node:path'
 import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { makeConductor, makePart } from '../../shared/design/builder'
 import type { Design, DesignSettings } from '../../shared/design/schema'
 import { generatedDesign } from '../helpers/generatedDesign'
 import { startBrowserSession, type BrowserSession } from '../helpers/browserSession'
-
-const ROOT = path.resolve(import.meta.dirname, '../..')
-// A client built elsewhere may be named here (a path without dot-folders: the server will not send from those).
-const CLIENT_DIR = process.env.AMPWRIGHT_CLIENT_DIR ?? path.join(ROOT, 'dist')
 
 let session: BrowserSession
 let page: Page
@@ -63,7 +58,8 @@ const currentOf = async (id: string) => (await scheduleRow(id).locator('td').nth
 const dialog = () => page.locator('[data-testid="scenario-dialog"]')
 
 beforeAll(async () => {
-  session = await startBrowserSession({ clientDir: CLIENT_DIR })
+  // The client: dist/, or the one AMPWRIGHT_CLIENT_DIR names (see the helper's CLIENT_DIR).
+  session = await startBrowserSession()
   page = session.page
   await api('post', '/auth/signup', {
     name: 'Maren Oduya',
