@@ -102,4 +102,16 @@ describe('findings table', () => {
     await flushPromises()
     expect(readOnly.wrapper.findAll('.findings-table__apply')).toHaveLength(0)
   })
+
+  it('says the design is being analysed, not that it has no findings, while an empty list waits for a result', async () => {
+    for (const [analysing, text] of [[true, 'Analysing the design…'], [false, 'No findings for this design.']] as const) {
+      const Host = defineComponent({
+        setup: () => () => h(VApp, null, { default: () => h(FindingsTable, { findings: [], nameOf: (id: string) => id, canApply: true, analysing }) }),
+      })
+      const wrapper = mount(Host, { attachTo: document.body, global: { plugins: [createAmpwrightVuetify()] } })
+      await flushPromises()
+      expect(wrapper.find('tbody').text()).toContain(text)
+      wrapper.unmount()
+    }
+  })
 })
