@@ -53,14 +53,15 @@ const fuseFindings = () => findingRows().filter({ hasText: 'Fuse 1' }).filter({ 
 
 beforeAll(async () => {
   // The default 1280×720 viewport: the smallest screen the editor is laid out for.
-  session = await startBrowserSession()
-  page = session.page
-  await api('post', '/auth/signup', {
-    name: 'Ines Harrow',
-    email: `ines.${suffix}@harrow-vans.test`,
-    password: 'ferrules-and-crimp-dies',
-    organizationName: `Harrow Van Works ${suffix}`,
+  session = await startBrowserSession({
+    signUp: {
+      name: 'Ines Harrow',
+      email: `ines.${suffix}@harrow-vans.test`,
+      password: 'ferrules-and-crimp-dies',
+      organizationName: `Harrow Van Works ${suffix}`,
+    },
   })
+  page = session.page
 })
 
 afterAll(async () => {

@@ -30,6 +30,8 @@ export interface BrowserSessionOptions {
   viewport?: { width: number; height: number }
   /** A server another session started: a second person's page shares it and leaves it running at close. */
   server?: TestServer
+  /** A new person and organisation to sign the page up as (POST /api/auth/signup) once it is open. */
+  signUp?: { name: string; email: string; password: string; organizationName: string }
 }
 
 /** The client `npx vite build` made, unless AMPWRIGHT_CLIENT_DIR names one built elsewhere. */
@@ -57,7 +59,7 @@ export async function startBrowserSession(options: BrowserSessionOptions = {}): 
     if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
   })
   await page.goto(server.baseUrl)
-  return {
+  const session: BrowserSession = {
     server,
     context,
     page,
@@ -75,6 +77,14 @@ export async function startBrowserSession(options: BrowserSessionOptions = {}): 
       fs.rmSync(profileDir, { recursive: true, force: true })
     },
   }
+  if (options.signUp) {
+    // A failed sign-up fails the test before the caller holds the session: close it here.
+    await session.api('post', '/auth/signup', options.signUp).catch(async (error) => {
+      await session.close()
+      throw error
+    })
+  }
+  return session
 }
 
 /** Several people's pages on one server, each in a profile of its own (its own session cookie). */
