@@ -59,14 +59,15 @@ const dialog = () => page.locator('[data-testid="scenario-dialog"]')
 
 beforeAll(async () => {
   // The client: dist/, or the one AMPWRIGHT_CLIENT_DIR names (see the helper's CLIENT_DIR).
-  session = await startBrowserSession()
-  page = session.page
-  await api('post', '/auth/signup', {
-    name: 'Maren Oduya',
-    email: `maren.${suffix}@oduya-campers.test`,
-    password: 'heat-shrink-and-lugs',
-    organizationName: `Oduya Campers ${suffix}`,
+  session = await startBrowserSession({
+    signUp: {
+      name: 'Maren Oduya',
+      email: `maren.${suffix}@oduya-campers.test`,
+      password: 'heat-shrink-and-lugs',
+      organizationName: `Oduya Campers ${suffix}`,
+    },
   })
+  page = session.page
 })
 
 afterAll(async () => {
