@@ -18,11 +18,13 @@ const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000,
 const api: BrowserSession['api'] = (...args) => session.api(...args)
 
 beforeAll(async () => {
-  session = await startBrowserSession({ viewport: { width: 1440, height: 900 } })
-  page = session.page
-  await api('post', '/auth/signup', {
-    name: 'Rune Maelstad', email: `rune.${suffix}@maelstad-fitout.test`, password: 'crimp-then-solder', organizationName: `Maelstad Fit-out ${suffix}`,
+  session = await startBrowserSession({
+    viewport: { width: 1440, height: 900 },
+    signUp: {
+      name: 'Rune Maelstad', email: `rune.${suffix}@maelstad-fitout.test`, password: 'crimp-then-solder', organizationName: `Maelstad Fit-out ${suffix}`,
+    },
   })
+  page = session.page
 })
 
 afterAll(async () => {
