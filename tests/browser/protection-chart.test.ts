@@ -20,11 +20,13 @@ const api: BrowserSession['api'] = (...args) => session.api(...args)
 
 // Persistent contexts accept downloads by default: the PNG export below relies on it.
 beforeAll(async () => {
-  session = await startBrowserSession({ viewport: { width: 1440, height: 900 } })
-  page = session.page
-  await api('post', '/auth/signup', {
-    name: 'Odile Brack', email: `odile.${suffix}@brack-marine.test`, password: 'heat-shrink-and-lugs', organizationName: `Brack Mobile Power ${suffix}`,
+  session = await startBrowserSession({
+    viewport: { width: 1440, height: 900 },
+    signUp: {
+      name: 'Odile Brack', email: `odile.${suffix}@brack-marine.test`, password: 'heat-shrink-and-lugs', organizationName: `Brack Mobile Power ${suffix}`,
+    },
   })
+  page = session.page
 })
 
 afterAll(async () => {
