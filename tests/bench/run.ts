@@ -28,7 +28,3 @@ for (const name of modules) {
     process.exitCode = 1
   }
 }
-
-// Every module has printed its figures; a socket or timer a module left open (a pool, a child's pipe)
-// must not keep `npm run bench` from ending.
-process.exit(process.exitCode ?? 0)

@@ -120,6 +120,8 @@ export class RawCollabClient {
       this.closed = true
       this.closeCode = code
       this.closeReason = reason.toString()
+      // The awareness keeps a 3 s check timer: without this, a closed client keeps its process alive.
+      this.awareness.destroy()
     })
   }
 
