@@ -30,7 +30,6 @@ function applyRole(db: Db, peer: LivePeer, role: Role): void {
   const { access } = peer
   if (access.role === role) return
   access.role = role
-  access.readOnly = !can(role, 'design.write')
   peer.noticeAccess()
   if (!can(role, 'project.readAll')) void closeUnlessVisible(db, peer)
 }

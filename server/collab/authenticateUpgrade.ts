@@ -19,8 +19,8 @@ export interface CollabAccess {
   user: { id: string; name: string }
   organizationId: string
   role: Role
-  /** Reviewers and clients watch: their document updates are dropped. Follows role changes. */
-  readOnly: boolean
+  /** Reviewers and clients watch: their document updates are dropped. Read from `role`, so it follows role changes. */
+  readonly readOnly: boolean
   /** When the session ends (the connection is closed with 4401 then). */
   expiresAt: Date
   /** The session the connection was opened with: signing out closes it (4401). */
@@ -100,7 +100,9 @@ export async function authenticateUpgrade(deps: { db: Db; config: AppConfig }, r
       user: { id: auth.user.id, name: auth.user.name },
       organizationId: auth.organization.id,
       role: auth.role,
-      readOnly: !can(auth.role, 'design.write'),
+      get readOnly() {
+        return !can(this.role, 'design.write')
+      },
       expiresAt: auth.expiresAt,
       sessionId: auth.sessionId,
     },

@@ -18,7 +18,7 @@ export interface PeerStats {
 
 /** An open connection as the access follower sees it. */
 export interface LivePeer {
-  /** Mutable: role changes rewrite role and readOnly. */
+  /** Mutable: role changes rewrite the role (readOnly follows it). */
   readonly access: CollabAccess
   close(code: number, reason: string): void
   /** Tells the client its role changed (a y-protocols auth message, see accessNoticeReason). */
