@@ -13,7 +13,7 @@ import { buildTerminalNodes } from './_lib/terminalNodes'
 import { makeFinding, mergeFindings } from './findings'
 import { protectionTopology } from './protectionTopology'
 import { COORDINATION_RULES, RULES } from './rules'
-import type { PvGroup, RuleContext } from './rules/types'
+import type { IdLookup, PvGroup, RuleContext } from './rules/types'
 import type { AnalysisResult, Finding } from './types'
 
 export interface AnalyzeOptions {
@@ -80,14 +80,16 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
   const faults = faultStudy(design, prepared, topology)
   const conductors = conductorStats(design, solves, topology, faults.conductorFarEndA, pvGroups, devices, prepared.passive!)
   const deviceList = deviceStats(design, devices, solves, topology, faults.deviceFaultA, pvGroups, conductorsAt, conductors)
+  const partIndex = prepared.passive!.partIndex
   const ctx: RuleContext = {
     design, profile: design.settings.profile, nominalV: design.settings.nominalVoltageV,
-    conductors, conductorById: new Map(conductors.map((c) => [c.conductor.id, c])),
-    devices: deviceList, deviceById: new Map(deviceList.map((d) => [d.device.id, d])),
-    partById: new Map(design.parts.map((p) => [p.id, p])), conductorsAtPart: conductorsAt,
+    conductors, conductorById: byId(conductors, (c) => c.conductor.id),
+    devices: deviceList, deviceById: byId(deviceList, (d) => d.device.id),
+    partById: { get: (id) => { const k = partIndex.get(id); return k === undefined ? undefined : design.parts[k] } },
+    conductorsAtPart: conductorsAt,
     loadDrops: loadDrops(design, solves, topology, conductorsAt), pvGroups, nodes, topology,
-    partMaxCurrent: partMaxCurrents(design, solves),
-    loadRunningA: loadRunningCurrents(design, solves),
+    partMaxCurrent: partMaxCurrents(design, solves, partIndex),
+    loadRunningA: loadRunningCurrents(design, solves, partIndex),
   }
   for (const rule of options.coordination === false ? RULES : [...RULES, ...COORDINATION_RULES]) {
     try {
@@ -121,8 +123,15 @@ function buildPvGroups(design: Design, byController: Map<string, PartOf<'pv-arra
     .filter((g) => g.arrays.length > 0)
 }
 
+/** Items by id (the last of a repeated id wins, as the rules have always read them). */
+function byId<T>(items: readonly T[], idOf: (item: T) => string): Map<string, T> {
+  const map = new Map<string, T>()
+  for (const item of items) map.set(idOf(item), item)
+  return map
+}
+
 /** Highest |current| per part over the scenarios; a bus bar's is the total fed into it. */
-function partMaxCurrents(design: Design, solves: ScenarioSolve[]): Map<string, { currentA: number; scenarioId: string }> {
+function partMaxCurrents(design: Design, solves: ScenarioSolve[], partIndex: Map<string, number>): IdLookup<{ currentA: number; scenarioId: string }> {
   const { parts, conductors } = design
   // Worst so far per part (design order) and the scenario it came from (index, −1 none).
   const worstA = new Float64Array(parts.length)
@@ -148,24 +157,29 @@ function partMaxCurrents(design: Design, solves: ScenarioSolve[]): Map<string, {
     }
     for (let k = 0; k < parts.length; k++) if (fed[k]) note(k, inflow[k], scenario)
   })
-  const result = new Map<string, { currentA: number; scenarioId: string }>()
-  parts.forEach((p, k) => { if (worstScenario[k] >= 0) result.set(p.id, { currentA: worstA[k], scenarioId: solves[worstScenario[k]].scenario.id }) })
-  return result
+  // Read for the few rated part types only: each record is made when asked for.
+  return {
+    get: (id) => {
+      const k = partIndex.get(id)
+      return k === undefined || worstScenario[k] < 0 ? undefined : { currentA: worstA[k], scenarioId: solves[worstScenario[k]].scenario.id }
+    },
+  }
 }
 
 /** Running current per load: the highest outside motor-start scenarios, else its rating at nominal voltage. */
-function loadRunningCurrents(design: Design, solves: ScenarioSolve[]): Map<string, number> {
-  const result = new Map<string, number>()
+function loadRunningCurrents(design: Design, solves: ScenarioSolve[], partIndex: Map<string, number>): IdLookup<number> {
   const nominalV = design.settings.nominalVoltageV
-  design.parts.forEach((part, k) => {
-    if (part.type !== 'load') return
+  // Read for loads with a start only: worked out when asked for.
+  const runningA = (k: number): number | undefined => {
+    const part = design.parts[k]
+    if (part.type !== 'load') return undefined
     let amps = 0
     for (const s of solves) if (!s.scenario.motorStart) amps = Math.max(amps, Math.abs(s.partCurrentA[k]))
     if (amps === 0) {
       const p = part.params
       amps = p.model === 'current' ? (p.currentA ?? 0) : p.model === 'power' ? (p.powerW ?? 0) / nominalV : nominalV / (p.resistanceOhm ?? Infinity)
     }
-    result.set(part.id, finite(amps))
-  })
-  return result
+    return finite(amps)
+  }
+  return { get: (id) => { const k = partIndex.get(id); return k === undefined ? undefined : runningA(k) } }
 }

@@ -74,17 +74,18 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
   const base = prepared?.passive ?? buildPassiveCircuit(design, nodes, devices)
   const nominalV = design.settings.nominalVoltageV
   const minVoltageV = 0.5 * nominalV // constant-power loads turn resistive below half voltage (ZIP-load practice)
-  // The wiring, devices and banks are the same in every scenario: copy them, then add what runs.
-  const elements: CircuitElement[] = base.elements.slice()
-  const owners: ElementOwner[] = base.owners.slice()
+  // The wiring, devices and banks are the same in every scenario: what runs is collected apart and
+  // appended once at the end (one copy of the big arrays per scenario, not a copy and a regrowth).
+  const added: CircuitElement[] = []
+  const addedOwners: ElementOwner[] = []
   const partElementAt = base.partElementAt.slice()
   const problems: CompileProblem[] = base.problems.slice()
   const { conductorElementAt, deviceElementAt, batteryNegNodes, arraysOfController } = base
   const node = (partId: string, terminal: string) => nodeAt(nodes, partId, terminal)
   const add = (el: CircuitElement, owner: ElementOwner) => {
-    elements.push(el)
-    owners.push(owner)
-    return elements.length - 1
+    added.push(el)
+    addedOwners.push(owner)
+    return base.elements.length + added.length - 1
   }
   const sameSupply = (a: number, b: number) => base.suppliedRoot[a] === base.suppliedRoot[b]
   const canSupply = (...ns: (number | undefined)[]) => ns.every((n) => n !== undefined && base.hasBattery[base.suppliedRoot[n]] === 1)
@@ -114,13 +115,14 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
         if (!canSupply(pos, neg)) { noSupply(part); break }
         const p = part.params
         const inrush = scenario.motorStart && p.start ? p.start.inrushMultiple : 1
+        const id = base.ownElementId(k)
         const el: CircuitElement =
           p.model === 'current'
-            ? { kind: 'isource', id: `p:${part.id}`, from: pos!, to: neg!, currentA: finite((p.currentA ?? 0) * level * inrush) }
+            ? { kind: 'isource', id, from: pos!, to: neg!, currentA: finite((p.currentA ?? 0) * level * inrush) }
             : p.model === 'resistance'
-              ? { kind: 'resistor', id: `p:${part.id}`, a: pos!, b: neg!, resistanceOhm: finite((p.resistanceOhm ?? 1e6) / level / inrush, 1e6) }
-              : { kind: 'cpower', id: `p:${part.id}`, pos: pos!, neg: neg!, powerW: finite((p.powerW ?? 0) * level * inrush), minVoltageV }
-        setOwn(part.id, add(el, { kind: 'part', id: part.id, role: 'main' }))
+              ? { kind: 'resistor', id, a: pos!, b: neg!, resistanceOhm: finite((p.resistanceOhm ?? 1e6) / level / inrush, 1e6) }
+              : { kind: 'cpower', id, pos: pos!, neg: neg!, powerW: finite((p.powerW ?? 0) * level * inrush), minVoltageV }
+        setOwn(part.id, add(el, base.ownOwner(k)))
         break
       }
       case 'inverter': {
@@ -189,8 +191,13 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
     setOwn(part.id, add({ kind: 'cpower', id: `p:${part.id}`, pos: ns[2], neg: ns[3], powerW: -finite(outW), minVoltageV }, { kind: 'part', id: part.id, role: 'main' }))
   }
 
+  const elements = base.elements.concat(added)
+  const owners = base.owners.concat(addedOwners)
+  const circuit: Circuit = { nodeCount: nodes.nodeCount, elements }
+  // Node names (for netlists and messages) are made when first read: the analysis never reads them.
+  Object.defineProperty(circuit, 'nodeNames', { enumerable: true, get: () => nodes.nodeNames })
   const compiled: Omit<CompiledCircuit, 'partElement' | 'conductorElement' | 'deviceElement'> = {
-    circuit: { nodeCount: nodes.nodeCount, nodeNames: nodes.nodeNames, elements },
+    circuit,
     nodes, owners, conductorElementAt, partElementAt, deviceElementAt, batteryNegNodes, problems,
   }
   // The passive circuit's id-keyed maps, read through (and so built) only when someone reads them.

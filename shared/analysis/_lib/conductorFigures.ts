@@ -1,6 +1,7 @@
 import { resistancePerMetreOhm } from '../../conductors/resistance'
 import type { Conductor, DesignSettings } from '../../design/schema'
 import { finite } from './finite'
+import { TupleMemo } from './tupleMemo'
 
 /**
  * Conductor temperature used for its resistance: the conductor's ambient (or the design default).
@@ -21,20 +22,23 @@ export function conductorTemperatureC(c: Conductor, settings: DesignSettings): n
 export function conductorOhm(c: Conductor, settings: DesignSettings): number | null {
   if (!(Number.isFinite(c.lengthM) && c.lengthM >= 0)) return null
   const temperatureC = conductorTemperatureC(c, settings)
-  const key = `${c.sizeId}|${c.material}|${temperatureC}`
-  let perM = OHM_PER_M.get(key)
+  OHM_KEY[0] = c.sizeId
+  OHM_KEY[1] = c.material
+  OHM_KEY[2] = temperatureC
+  let perM = OHM_PER_M.get(OHM_KEY)
   if (perM === undefined) {
     try {
       perM = resistancePerMetreOhm({ sizeId: c.sizeId, material: c.material, temperatureC })
     } catch {
       perM = Number.NaN
     }
-    if (OHM_PER_M.size >= 4096) OHM_PER_M.clear()
-    OHM_PER_M.set(key, perM)
+    OHM_PER_M.set([c.sizeId, c.material, temperatureC], perM)
   }
   const r = perM * c.lengthM
   return Number.isFinite(r) && r > 0 ? r : null
 }
-const OHM_PER_M = new Map<string, number>()
+const OHM_PER_M = new TupleMemo<number>()
+/** Reused look-up key (size, material, °C): no array per conductor. */
+const OHM_KEY: unknown[] = [undefined, undefined, undefined]
 
 export { finite }

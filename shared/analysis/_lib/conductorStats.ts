@@ -8,24 +8,36 @@ import type { ScenarioSolve } from './solveScenario'
 import { conductorOhm, conductorTemperatureC } from './conductorFigures'
 import type { PassiveCircuit } from './passiveCircuit'
 import { finite } from './finite'
+import { TupleMemo } from './tupleMemo'
 
 type AmpacityFigure = { result: AmpacityResult | null; source: string }
+/** Ampacity figures of one analysis, by their inputs (see ampacityOf). */
+export type AmpacityMemo = TupleMemo<AmpacityFigure>
 
-/** Ampacity of a conductor under the design's profile; null (with the reason) when the tables refuse it. */
-export function ampacityOf(c: Conductor, design: Design, circuitVoltageV: number, memo?: Map<string, AmpacityFigure>): AmpacityFigure {
+/**
+ * Ampacity of a conductor (or of the same run in another size: `sizeId`) under the design's profile;
+ * null (with the reason) when the tables refuse it.
+ */
+export function ampacityOf(c: Conductor, design: Design, circuitVoltageV: number, memo?: AmpacityMemo, sizeId: Conductor['sizeId'] = c.sizeId): AmpacityFigure {
+  if (!memo) return ampacityUncached(c, sizeId, design, circuitVoltageV)
   // Most conductors of a design share size, insulation and installation: look each combination up once.
-  const key = memo ? `${c.sizeId}|${c.material}|${c.insulationRatingC}|${c.ambientC ?? ''}|${c.installation}|${c.bundledCount}|${circuitVoltageV}` : ''
-  const seen = memo?.get(key)
-  if (seen) return seen
-  const figure = ampacityUncached(c, design, circuitVoltageV)
-  memo?.set(key, figure)
-  return figure
+  const key = AMPACITY_KEY
+  key[0] = sizeId
+  key[1] = c.material
+  key[2] = c.insulationRatingC
+  key[3] = c.ambientC ?? null
+  key[4] = c.installation
+  key[5] = c.bundledCount
+  key[6] = circuitVoltageV
+  return memo.get(key) ?? memo.set([...key], ampacityUncached(c, sizeId, design, circuitVoltageV))
 }
+/** Reused look-up key: no array or string per conductor. */
+const AMPACITY_KEY: unknown[] = new Array(7)
 
-function ampacityUncached(c: Conductor, design: Design, circuitVoltageV: number): AmpacityFigure {
+function ampacityUncached(c: Conductor, sizeId: Conductor['sizeId'], design: Design, circuitVoltageV: number): AmpacityFigure {
   try {
     const result = conductorAmpacityA({
-      sizeId: c.sizeId, material: c.material, insulationRatingC: c.insulationRatingC,
+      sizeId, material: c.material, insulationRatingC: c.insulationRatingC,
       ambientC: conductorTemperatureC(c, design.settings), installation: c.installation,
       bundledCount: c.bundledCount, profile: design.settings.profile, circuitVoltageV,
     })
@@ -55,8 +67,7 @@ export function conductorStats(
   for (const g of pvGroups) for (const a of g.arrays) groupOfArray.set(a.id, g)
   const arrayById = new Map(pvGroups.flatMap((g) => g.arrays.map((a) => [a.id, a] as const)))
   const controllerGroup = new Map(pvGroups.map((g) => [g.controller.id, g]))
-  const ampacityMemo = new Map<string, AmpacityFigure>()
-  const ocpdMemo = new Map<string, number>()
+  const ampacityMemo: AmpacityMemo = new TupleMemo()
 
   return design.conductors.map((c, i) => {
     let maxCurrentA = 0
@@ -74,7 +85,7 @@ export function conductorStats(
     const pv = pvRole(c, tapped.side === 'pv' ? tapped.sourcePartId : null, arrayById, groupOfArray, controllerGroup)
     const circuitVoltageV = pv ? Math.max(nominalV, ...pv.arrays.map((a) => a.params.moduleVocV * a.params.modulesPerString)) : nominalV
     const { result, source } = ampacityOf(c, design, circuitVoltageV, ampacityMemo)
-    const protection = branchProtection(c, tapped, result?.ampacityA ?? null, design, deviceById, ocpdMemo)
+    const protection = branchProtection(c, tapped, result?.ampacityA ?? null, design, deviceById)
     return {
       conductor: c, maxCurrentA: finite(maxCurrentA), maxScenarioId, steadyCurrentA: finite(steadyCurrentA), steadyScenarioId, ampacity: result,
       ampacityA: result?.ampacityA ?? null, ampacitySource: source, ambientC: conductorTemperatureC(c, design.settings),
@@ -111,20 +122,14 @@ function pvRole(
  */
 function branchProtection(
   c: Conductor, p: ConductorProtection, ampacityA: number | null, design: Design, deviceById: Map<string, ProtectiveDevice>,
-  memo: Map<string, number>,
 ): ConductorProtection {
   if (p.protectedFrom !== 'upstream' || ampacityA === null || !p.protectingDeviceId || !p.downstreamDeviceId || p.downstreamRunM === null) return p
   const upstream = deviceById.get(p.protectingDeviceId)
   const own = deviceById.get(p.downstreamDeviceId)
   if (!upstream || !own) return p
-  const allowed = (family: string) => {
-    const key = `${c.sizeId}|${c.material}|${ampacityA}|${family}`
-    let value = memo.get(key)
-    if (value === undefined) memo.set(key, (value = maxDeviceRating(c, ampacityA, design.settings.profile, family)?.maxRatingA ?? 0))
-    return value
-  }
-  if (upstream.ratingA <= allowed(upstream.family) + 1e-9) return p
+  const profile = design.settings.profile
+  if (upstream.ratingA <= (maxDeviceRating(c, ampacityA, profile, upstream.family)?.maxRatingA ?? 0) + 1e-9) return p
   const limitM = c.sheathed ? BRANCH_DISTANCE_LIMITS.sheathedM : BRANCH_DISTANCE_LIMITS.bareM
-  if (p.downstreamRunM > limitM + 1e-9 || own.ratingA > allowed(own.family) + 1e-9) return p
+  if (p.downstreamRunM > limitM + 1e-9 || own.ratingA > (maxDeviceRating(c, ampacityA, profile, own.family)?.maxRatingA ?? 0) + 1e-9) return p
   return { ...p, protectingDeviceId: own.id, protectedFrom: 'branch', deviceDistanceM: p.downstreamRunM, runSheathed: c.sheathed }
 }

@@ -1,5 +1,6 @@
 import { maxOcpdA, type MaxOcpdResult } from '../../conductors/maxOcpd'
 import type { Conductor, Design } from '../../design/schema'
+import { TupleMemo } from './tupleMemo'
 import { DEVICE_FAMILY_IDS, type DeviceFamilyId } from '../../protection/ratings'
 
 export function familyId(family: string): DeviceFamilyId | undefined {
@@ -9,20 +10,26 @@ export function familyId(family: string): DeviceFamilyId | undefined {
 /** Largest device a conductor may have under the design's profile; null when the tables refuse the input. */
 export function maxDeviceRating(c: Conductor, ampacityA: number, profile: Design['settings']['profile'], family: string): MaxOcpdResult | null {
   // Few distinct inputs per design (sizes × ampacities × families), asked per device by several rules.
-  const key = `${c.sizeId}|${c.material}|${ampacityA}|${profile}|${family}`
+  const key = LIMIT_KEY
+  key[0] = c.sizeId
+  key[1] = c.material
+  key[2] = ampacityA
+  key[3] = profile
+  key[4] = family
   const known = LIMITS.get(key)
   if (known !== undefined) return known
+  const keys = [...key] // before the tables run: they must not see a key changed under them
   let result: MaxOcpdResult | null
   try {
     result = Object.freeze(maxOcpdA({ sizeId: c.sizeId, material: c.material, ampacityA: Math.max(0, ampacityA), profile, family: familyId(family) }))
   } catch {
     result = null
   }
-  if (LIMITS.size >= 4096) LIMITS.clear()
-  LIMITS.set(key, result)
-  return result
+  return LIMITS.set(keys, result)
 }
-const LIMITS = new Map<string, MaxOcpdResult | null>()
+const LIMITS = new TupleMemo<MaxOcpdResult | null>()
+/** Reused look-up key: no string per call (asked per conductor and per device). */
+const LIMIT_KEY: unknown[] = new Array(5)
 
 /**
  * Where a branch device may sit from the bus or panel it is tapped from (m): ABYC E-11 §11.10, 7 in

@@ -26,6 +26,9 @@ export interface PassiveCircuit {
   suppliedRoot: Int32Array
   hasBattery: Uint8Array
   arraysOfController: Map<string, PartOf<'pv-array'>[]>
+  /** Per part position: the id of the part's own element ("p:<id>") and its owner record, made once and shared by every scenario. */
+  ownElementId: (k: number) => string
+  ownOwner: (k: number) => ElementOwner
 }
 
 export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, devices: ProtectiveDevice[]): PassiveCircuit {
@@ -102,10 +105,14 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
   const hasBattery = new Uint8Array(nodes.nodeCount)
   for (const n of batteryNegNodes) hasBattery[suppliedRoot[n]] = 1
 
+  const ownIds: string[] = new Array(design.parts.length)
+  const ownOwners: ElementOwner[] = new Array(design.parts.length)
   const passive = {
     elements, owners, conductorElementAt, partElementAt, deviceElementAt, partIndex,
     batteryNegNodes, problems, suppliedRoot, hasBattery,
     arraysOfController: pvArraysByController(design, nodes, series),
+    ownElementId: (k: number) => (ownIds[k] ??= `p:${design.parts[k].id}`),
+    ownOwner: (k: number) => (ownOwners[k] ??= { kind: 'part', id: design.parts[k].id, role: 'main' }),
   }
   // The id-keyed views (tests, references, tools) are built on first read; the analysis reads positions.
   lazyIdMap(passive, 'conductorElement', design.conductors, conductorElementAt)

@@ -36,8 +36,8 @@ export interface TerminalNodes {
   nodeCount: number
   /** "partId:terminal" → node number (built on first read: the analysis itself looks terminals up by part). */
   readonly nodeOf: Map<string, number>
-  /** Per node, the first terminal key on it (for netlists and messages). */
-  nodeNames: string[]
+  /** Per node, the first terminal key on it (for netlists and messages; built on first read). */
+  readonly nodeNames: string[]
   /** Per part, its terminals (with polarity) as the catalogue gives them for this part (built on first read; byPart holds them too). */
   readonly terminalsOf: Map<string, TerminalInfo[]>
   /** Per part id, its terminal ids and their nodes: look-ups without building "partId:terminal" strings. */
@@ -145,12 +145,12 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
   }
   const nodeOfRoot = new Int32Array(slotPart.length).fill(-1)
   const nodeOfSlot = new Int32Array(slotPart.length)
-  const nodeNames: string[] = []
+  const firstSlotOfNode: number[] = []
   for (let i = 0; i < slotPart.length; i++) {
     const root = uf.find(i)
     if (nodeOfRoot[root] < 0) {
-      nodeOfRoot[root] = nodeNames.length
-      nodeNames.push(terminalKey(slotPart[i], slotTerminal[i]))
+      nodeOfRoot[root] = firstSlotOfNode.length
+      firstSlotOfNode.push(i)
     }
     nodeOfSlot[i] = nodeOfRoot[root]
   }
@@ -172,8 +172,13 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
     conductorTo[i] = entry ? nodeIn(entry, c.to.terminal) : -1
     conductorToPolarity[i] = entry ? polarityIn(entry.terminals, c.to.terminal) : undefined
   }
-  const nodes = { nodeCount: nodeNames.length, nodeNames, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity }
+  const nodes = { nodeCount: firstSlotOfNode.length, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity }
   let nodeOf: Map<string, number> | undefined
+  let nodeNames: string[] | undefined
+  Object.defineProperty(nodes, 'nodeNames', {
+    enumerable: true,
+    get: () => (nodeNames ??= firstSlotOfNode.map((i) => terminalKey(slotPart[i], slotTerminal[i]))),
+  })
   let terminalsOf: Map<string, TerminalInfo[]> | undefined
   Object.defineProperty(nodes, 'terminalsOf', {
     enumerable: true,

@@ -60,7 +60,7 @@ function largerPassingSize(ctx: RuleContext, s: ConductorStats, currentA: number
   const size = getConductorSize(s.conductor.sizeId)
   for (const candidate of sizesInOrder(size.system)) {
     if (candidate.rank <= size.rank) continue
-    const { result } = ampacityOf({ ...s.conductor, sizeId: candidate.id }, ctx.design, ctx.nominalV)
+    const { result } = ampacityOf(s.conductor, ctx.design, ctx.nominalV, undefined, candidate.id)
     if (result?.ampacityA != null && result.baseAmpacityA != null && result.baseAmpacityA >= 1.25 * currentA && result.ampacityA >= currentA) return candidate.id
   }
   return null

@@ -1,6 +1,6 @@
-import type { AmpacityResult } from '../../conductors/ampacity'
 import { circuitDrop } from '../../conductors/voltageDrop'
-import { ampacityOf } from '../_lib/conductorStats'
+import { ampacityOf, type AmpacityMemo } from '../_lib/conductorStats'
+import { TupleMemo } from '../_lib/tupleMemo'
 import { conductorSizeLabel, getConductorSize, sizesInOrder } from '../../conductors/sizes'
 import { nextStandardRatingA, nearestStandardRatingAtMost } from '../../protection/ratings'
 import { familyId } from '../_lib/ocpdLimit'
@@ -12,20 +12,20 @@ import type { RuleContext } from './types'
 // that passes — with a patch the editor can apply.
 
 // Ampacity of each candidate size, looked up once per analysis (a design has few distinct runs).
-const ampacityMemos = new WeakMap<RuleContext, Map<string, { result: AmpacityResult | null; source: string }>>()
+const ampacityMemos = new WeakMap<RuleContext, AmpacityMemo>()
 
 /** Smallest size of the conductor's own system (AWG or mm²) carrying `currentA` within `allowedDropPercent` over its loop. */
 export function suggestConductor(ctx: RuleContext, c: Conductor, currentA: number, allowedDropPercent = 100, why = ''): Finding['suggestion'] | undefined {
   try {
     let memo = ampacityMemos.get(ctx)
-    if (!memo) ampacityMemos.set(ctx, (memo = new Map()))
+    if (!memo) ampacityMemos.set(ctx, (memo = new TupleMemo()))
     const size = getConductorSize(c.sizeId)
     // Solver round-off (25.000000001 A) must not skip a size that fits exactly.
     const needA = Math.max(0, currentA - 1e-6)
     const temperatureC = c.ambientC ?? ctx.design.settings.defaultAmbientC
     let found: string | null = null
     for (const candidate of sizesInOrder(size.system)) {
-      const ampacityA = ampacityOf({ ...c, sizeId: candidate.id }, ctx.design, ctx.nominalV, memo).result?.ampacityA
+      const ampacityA = ampacityOf(c, ctx.design, ctx.nominalV, memo, candidate.id).result?.ampacityA
       if (ampacityA == null || ampacityA < needA) continue
       const drop = circuitDrop({ currentA: needA, sizeId: candidate.id, material: c.material, lengthM: c.lengthM, temperatureC, nominalV: ctx.nominalV })
       if (drop.dropPercent <= Math.max(allowedDropPercent, 1e-6) + 1e-12) { found = candidate.id; break }

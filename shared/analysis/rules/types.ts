@@ -58,6 +58,11 @@ export interface PvGroup {
   arrays: PartOf<'pv-array'>[]
 }
 
+/** Read access by id (a Map, or a view over the analysis's arrays that builds no map of its own). */
+export interface IdLookup<V> {
+  get(id: string): V | undefined
+}
+
 export interface RuleContext {
   design: Design
   profile: Design['settings']['profile']
@@ -66,13 +71,13 @@ export interface RuleContext {
   conductorById: Map<string, ConductorStats>
   devices: DeviceStats[]
   deviceById: Map<string, DeviceStats>
-  partById: Map<string, Part>
+  partById: IdLookup<Part>
   conductorsAtPart: Map<string, Conductor[]>
   loadDrops: LoadDrop[]
   /** Running current of each load: the highest outside motor starts, else its rating at nominal voltage. */
-  loadRunningA: Map<string, number>
+  loadRunningA: IdLookup<number>
   /** Highest current through each part (bus bars: the current fed into the bar), over the scenarios. */
-  partMaxCurrent: Map<string, { currentA: number; scenarioId: string }>
+  partMaxCurrent: IdLookup<{ currentA: number; scenarioId: string }>
   pvGroups: PvGroup[]
   nodes: TerminalNodes
   topology: ProtectionTopology
