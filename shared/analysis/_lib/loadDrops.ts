@@ -22,6 +22,10 @@ export function loadDrops(design: Design, solves: ScenarioSolve[], topology: Pro
     if (!bankId || !batteryIds.has(bankId)) continue
     // Inverter feeders are treated as main feeders (3 %): ABYC E-11 lists panelboard main feeders as critical.
     const critical = part.type === 'inverter' || (part.type === 'load' && part.params.critical)
+    // The worst scenario first; its record is made once, after the loop.
+    let worstSolve: ScenarioSolve | null = null
+    let worstDropV = 0
+    let worstPercent = 0
     for (const s of solves) {
       // A motor start is a transient: the drop limits are for running conditions.
       if (s.scenario.motorStart || s.compiled.partElementAt[index] < 0 || s.op.status !== 'ok') continue
@@ -30,13 +34,20 @@ export function loadDrops(design: Design, solves: ScenarioSolve[], topology: Pro
       if (bankV === null || loadV === null) continue
       const dropV = finite(bankV - loadV)
       const dropPercent = finite((100 * dropV) / nominalV)
-      const seen = worst.get(part.id)
-      if (!seen || dropPercent > seen.dropPercent) {
-        worst.set(part.id, {
-          partId: part.id, scenarioId: s.scenario.id, dropV, dropPercent, critical,
-          currentA: Math.abs(s.partCurrentA[index]), conductorIds: attached.map((c) => c.id),
-        })
+      if (!worstSolve || dropPercent > worstPercent) {
+        worstSolve = s
+        worstDropV = dropV
+        worstPercent = dropPercent
       }
+    }
+    if (!worstSolve) continue
+    // A part id repeated in the design: the later part's record replaces the earlier one's only when worse.
+    const seen = worst.get(part.id)
+    if (!seen || worstPercent > seen.dropPercent) {
+      worst.set(part.id, {
+        partId: part.id, scenarioId: worstSolve.scenario.id, dropV: worstDropV, dropPercent: worstPercent, critical,
+        currentA: Math.abs(worstSolve.partCurrentA[index]), conductorIds: attached.map((c) => c.id),
+      })
     }
   }
   return [...worst.values()]

@@ -2,7 +2,7 @@ import { protectionChecks, RULE_PROFILES, type LoadStart, type ProtectionDevice,
 import { deviceChainOfPart } from '../_lib/deviceStats'
 import { maxDeviceRating } from '../_lib/ocpdLimit'
 import type { Finding } from '../types'
-import type { Rule, RuleContext } from './types'
+import type { ConductorStats, Rule, RuleContext } from './types'
 
 /**
  * Time-current checks from shared/protection: motor starts ride through, faults at the far end of the
@@ -18,10 +18,15 @@ export const protectionCoordinationRule: Rule = {
   run(ctx) {
     const starts = loadStartsByDevice(ctx)
     const devices: ProtectionDevice[] = ctx.devices.map((d) => {
-      // The weakest conductor the device protects, and the smallest far-end fault among them.
-      const protectedStats = d.protectsConductorIds.map((id) => ctx.conductorById.get(id)).filter((s) => s !== undefined)
-      const weakest = protectedStats.reduce<(typeof protectedStats)[number] | undefined>((w, s) => (!w || (s.ampacityA ?? Infinity) < (w.ampacityA ?? Infinity) ? s : w), undefined)
-      const farEnds = protectedStats.map((s) => s.faultFarEndA).filter((a) => a > 0)
+      // The weakest conductor the device protects (the first of equals), and the smallest far-end fault among them.
+      let weakest: ConductorStats | undefined
+      let farEndMinA = Infinity
+      for (const id of d.protectsConductorIds) {
+        const s = ctx.conductorById.get(id)
+        if (!s) continue
+        if (!weakest || (s.ampacityA ?? Infinity) < (weakest.ampacityA ?? Infinity)) weakest = s
+        if (s.faultFarEndA > 0 && s.faultFarEndA < farEndMinA) farEndMinA = s.faultFarEndA
+      }
       const maxRating = weakest?.ampacityA != null ? maxDeviceRating(weakest.conductor, weakest.ampacityA, ctx.profile, d.device.family)?.maxRatingA ?? undefined : undefined
       return {
         id: d.device.id, partId: d.device.partId, familyId: d.device.family, ratingA: d.device.ratingA, customDevice: d.device.customDevice,
@@ -30,7 +35,7 @@ export const protectionCoordinationRule: Rule = {
           insulationRatingC: weakest.conductor.insulationRatingC, maxDeviceRatingA: maxRating,
         } : undefined,
         faultCurrentAtDeviceA: d.faultCurrentA > 0 ? d.faultCurrentA : undefined,
-        faultCurrentFarEndA: farEnds.length > 0 ? Math.min(...farEnds) : undefined,
+        faultCurrentFarEndA: farEndMinA < Infinity ? farEndMinA : undefined,
         baseCurrentA: d.continuousA > 1e-6 ? d.continuousA : 0, // solver round-off is not a load
         loadStarts: starts.get(d.device.id),
         upstreamId: d.topology.upstreamDeviceId ?? undefined,

@@ -3,7 +3,7 @@ import type { Finding } from '../../analysis/types'
 import { bandOfDevice } from '../timeCurrent'
 import { ICEA_SOURCE, shortCircuitLimit, withstandI2tA2s, type WithstandOptions } from '../withstand'
 import { amps, seconds } from './_lib/format'
-import { partIdOf, positive, upstreamChain } from './_lib/chain'
+import { findUpstream, partIdOf, positive } from './_lib/chain'
 import type { ProtectionDevice, ProtectionRule, ResolvedContext } from './types'
 
 const FAULT_RULE = 'fault-not-cleared-before-damage'
@@ -54,7 +54,7 @@ function withstandOptions(conductor: NonNullable<ProtectionDevice['conductor']>,
 
 /** The first upstream device sure to clear `currentA` within `withinS`, if any (backup protection). */
 function backupFor(device: ProtectionDevice, context: ResolvedContext, currentA: number, withinS: number) {
-  return upstreamChain(device, context.byId).find((up) => bandOfDevice(up).maxClearS(currentA) < withinS)
+  return findUpstream(device, context.byId, (up) => bandOfDevice(up).maxClearS(currentA) < withinS)
 }
 
 /**
@@ -62,11 +62,13 @@ function backupFor(device: ProtectionDevice, context: ResolvedContext, currentA:
  * reaches its limit — the one with the smallest margin (withstand ÷ clearing time) — or null.
  */
 export function unclearedFault(device: ProtectionDevice, context: ResolvedContext): Case | null {
-  return (
-    faultCases(device)
-      .filter((c) => !(c.clearS < c.withstandS) && !backupFor(device, context, c.currentA, c.withstandS))
-      .sort((a, b) => a.withstandS / a.clearS - b.withstandS / b.clearS)[0] ?? null
-  )
+  // Asked per device and per time-delay alternative: a plain loop, the first of equal margins kept.
+  let worst: Case | null = null
+  for (const c of faultCases(device)) {
+    if (c.clearS < c.withstandS || backupFor(device, context, c.currentA, c.withstandS)) continue
+    if (!worst || c.withstandS / c.clearS < worst.withstandS / worst.clearS) worst = c
+  }
+  return worst
 }
 
 function run(device: ProtectionDevice, context: ResolvedContext): Finding[] {

@@ -21,17 +21,24 @@ export function deviceBand(familyId: string, ratingA: number): DeviceBand {
   }
   // Catalogue bands depend only on (family, rating) and are immutable: the analysis asks for the same
   // few thousand times per design, so each is built once.
-  const key = `${familyId}|${ratingA}`
-  let band = CATALOGUE_BANDS.get(key)
+  // By family, then rating: nested maps, so a look-up builds no key string.
+  let ofFamily = CATALOGUE_BANDS.get(familyId)
+  let band = ofFamily?.get(ratingA)
   if (band === undefined) {
     band = bandFromDefinition(familyId, ratingA, getTimeCurrentFamily(familyId).bandAt(ratingA))
-    if (CATALOGUE_BANDS.size >= CATALOGUE_BANDS_MAX) CATALOGUE_BANDS.clear()
-    CATALOGUE_BANDS.set(key, band)
+    if (++bandCount > CATALOGUE_BANDS_MAX) {
+      CATALOGUE_BANDS.clear()
+      ofFamily = undefined
+      bandCount = 1
+    }
+    if (!ofFamily) CATALOGUE_BANDS.set(familyId, (ofFamily = new Map()))
+    ofFamily.set(ratingA, band)
   }
   return band
 }
-const CATALOGUE_BANDS = new Map<string, DeviceBand>()
+const CATALOGUE_BANDS = new Map<string, Map<number, DeviceBand>>()
 const CATALOGUE_BANDS_MAX = 2000
+let bandCount = 0
 
 /** A band from a definition in multiples of `ratingA` (catalogue families and datasheet devices alike). */
 export function bandFromDefinition(familyId: string, ratingA: number, def: BandDefinition): DeviceBand {
