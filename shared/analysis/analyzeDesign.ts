@@ -7,6 +7,7 @@ import { deviceStats } from './_lib/deviceStats'
 import { protectiveDevices } from './_lib/devices'
 import { faultStudy } from './_lib/faultStudy'
 import { finite } from './_lib/finite'
+import { viewByIndex } from './_lib/idLookup'
 import { loadDrops } from './_lib/loadDrops'
 import { solveScenario, type ScenarioSolve } from './_lib/solveScenario'
 import { buildTerminalNodes } from './_lib/terminalNodes'
@@ -66,16 +67,7 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
   const solves: ScenarioSolve[] = scenarios.map((s) => solveScenario(design, s, prepared))
   for (const s of solves) findings.push(...s.findings)
 
-  const conductorsAt = new Map<string, Conductor[]>()
-  const attach = (partId: string, c: Conductor) => {
-    const list = conductorsAt.get(partId)
-    if (list) list.push(c)
-    else conductorsAt.set(partId, [c])
-  }
-  for (const c of design.conductors) {
-    attach(c.from.partId, c)
-    if (c.to.partId !== c.from.partId) attach(c.to.partId, c)
-  }
+  const conductorsAt: IdLookup<Conductor[]> = { get: (partId) => nodes.byPart.get(partId)?.conductors }
   const pvGroups = buildPvGroups(design, prepared.passive!.arraysOfController)
   const faults = faultStudy(design, prepared, topology)
   const conductors = conductorStats(design, solves, topology, faults.conductorFarEndA, pvGroups, devices, prepared.passive!)
@@ -83,8 +75,8 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
   const partIndex = prepared.passive!.partIndex
   const ctx: RuleContext = {
     design, profile: design.settings.profile, nominalV: design.settings.nominalVoltageV,
-    conductors, conductorById: byId(conductors, (c) => c.conductor.id),
-    devices: deviceList, deviceById: byId(deviceList, (d) => d.device.id),
+    conductors, conductorById: viewByIndex(nodes.conductorIndex, conductors),
+    devices: deviceList, deviceById: viewByIndex(topology.deviceIndex, deviceList),
     partById: { get: (id) => { const k = partIndex.get(id); return k === undefined ? undefined : design.parts[k] } },
     conductorsAtPart: conductorsAt,
     loadDrops: loadDrops(design, solves, topology, conductorsAt), pvGroups, nodes, topology,
@@ -123,15 +115,8 @@ function buildPvGroups(design: Design, byController: Map<string, PartOf<'pv-arra
     .filter((g) => g.arrays.length > 0)
 }
 
-/** Items by id (the last of a repeated id wins, as the rules have always read them). */
-function byId<T>(items: readonly T[], idOf: (item: T) => string): Map<string, T> {
-  const map = new Map<string, T>()
-  for (const item of items) map.set(idOf(item), item)
-  return map
-}
-
 /** Highest |current| per part over the scenarios; a bus bar's is the total fed into it. */
-function partMaxCurrents(design: Design, solves: ScenarioSolve[], partIndex: Map<string, number>): IdLookup<{ currentA: number; scenarioId: string }> {
+function partMaxCurrents(design: Design, solves: ScenarioSolve[], partIndex: IdLookup<number>): IdLookup<{ currentA: number; scenarioId: string }> {
   const { parts, conductors } = design
   // Worst so far per part (design order) and the scenario it came from (index, −1 none).
   const worstA = new Float64Array(parts.length)
@@ -167,7 +152,7 @@ function partMaxCurrents(design: Design, solves: ScenarioSolve[], partIndex: Map
 }
 
 /** Running current per load: the highest outside motor-start scenarios, else its rating at nominal voltage. */
-function loadRunningCurrents(design: Design, solves: ScenarioSolve[], partIndex: Map<string, number>): IdLookup<number> {
+function loadRunningCurrents(design: Design, solves: ScenarioSolve[], partIndex: IdLookup<number>): IdLookup<number> {
   const nominalV = design.settings.nominalVoltageV
   // Read for loads with a start only: worked out when asked for.
   const runningA = (k: number): number | undefined => {

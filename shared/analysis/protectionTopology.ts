@@ -1,5 +1,6 @@
 import type { Design } from '../design/schema'
 import type { ProtectiveDevice } from './_lib/devices'
+import { viewByIndex, type IdLookup } from './_lib/idLookup'
 import { MinHeap } from './_lib/minHeap'
 import { nodeAt, type TerminalNodes } from './_lib/terminalNodes'
 
@@ -42,8 +43,10 @@ export interface DeviceTopology {
 }
 
 export interface ProtectionTopology {
-  conductors: Map<string, ConductorProtection>
-  devices: Map<string, DeviceTopology>
+  conductors: IdLookup<ConductorProtection>
+  devices: IdLookup<DeviceTopology>
+  /** Device id → its position in the devices given (the last, for a repeated id). */
+  deviceIndex: Map<string, number>
   /** The same records by position: design.conductors order, and the order of the devices given. */
   conductorList: ConductorProtection[]
   deviceList: DeviceTopology[]
@@ -106,7 +109,6 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
   const fromBattery = walk(graph, n, edgeLen, sheathed, batteries.map((p) => nodeOf(p.id, 'pos')), batteries.map((p) => p.id))
   const fromArray = walk(graph, n, edgeLen, sheathed, arrays.map((p) => nodeOf(p.id, 'pos')), arrays.map((p) => p.id))
 
-  const conductors = new Map<string, ConductorProtection>()
   const conductorList: ConductorProtection[] = new Array(design.conductors.length)
   for (let i = 0; i < design.conductors.length; i++) {
     const c = design.conductors[i]
@@ -119,7 +121,6 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
       upstreamNode: ends.a, downstreamNode: ends.b, protectingDeviceId: null, protectedFrom: null, deviceDistanceM: null,
       runSheathed: false, downstreamDeviceId: null, downstreamRunM: null, sourcePartId: null,
     }
-    conductors.set(c.id, record)
     conductorList[i] = record
     if (!w) continue
     const u = w.dist[ends.a] <= w.dist[ends.b] ? ends.a : ends.b
@@ -145,10 +146,10 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
     }
   }
 
-  const deviceTopology = new Map<string, DeviceTopology>()
   const deviceList: DeviceTopology[] = new Array(devices.length)
+  const deviceIndex = new Map<string, number>()
   const setDevice = (i: number, record: DeviceTopology) => {
-    deviceTopology.set(record.deviceId, record)
+    deviceIndex.set(record.deviceId, i)
     deviceList[i] = record
   }
   devices.forEach((d, i) => {
@@ -167,7 +168,10 @@ export function protectionTopology(design: Design, nodes: TerminalNodes, devices
       sourcePartId: w.sourceId(line),
     })
   })
-  return { conductors, devices: deviceTopology, conductorList, deviceList }
+  return {
+    conductors: viewByIndex(nodes.conductorIndex, conductorList), devices: viewByIndex(deviceIndex, deviceList), deviceIndex,
+    conductorList, deviceList,
+  }
 }
 
 function buildGraph(n: number, a: number[], b: number[], conductor: number[], device: number[]): Graph {

@@ -8,6 +8,7 @@ import type { ScenarioSolve } from './solveScenario'
 import { conductorOhm, conductorTemperatureC } from './conductorFigures'
 import type { PassiveCircuit } from './passiveCircuit'
 import { finite } from './finite'
+import { viewByIndex, type IdLookup } from './idLookup'
 import { TupleMemo } from './tupleMemo'
 
 type AmpacityFigure = { result: AmpacityResult | null; source: string }
@@ -61,7 +62,7 @@ export function conductorStats(
   design: Design, solves: ScenarioSolve[], topology: ProtectionTopology, farEndA: Float64Array, pvGroups: PvGroup[],
   devices: ProtectiveDevice[], passive: PassiveCircuit,
 ): ConductorStats[] {
-  const deviceById = new Map(devices.map((d) => [d.id, d]))
+  const deviceById = viewByIndex(topology.deviceIndex, devices)
   const nominalV = design.settings.nominalVoltageV
   const groupOfArray = new Map<string, PvGroup>()
   for (const g of pvGroups) for (const a of g.arrays) groupOfArray.set(a.id, g)
@@ -121,7 +122,7 @@ function pvRole(
  * the one at its source end.
  */
 function branchProtection(
-  c: Conductor, p: ConductorProtection, ampacityA: number | null, design: Design, deviceById: Map<string, ProtectiveDevice>,
+  c: Conductor, p: ConductorProtection, ampacityA: number | null, design: Design, deviceById: IdLookup<ProtectiveDevice>,
 ): ConductorProtection {
   if (p.protectedFrom !== 'upstream' || ampacityA === null || !p.protectingDeviceId || !p.downstreamDeviceId || p.downstreamRunM === null) return p
   const upstream = deviceById.get(p.protectingDeviceId)

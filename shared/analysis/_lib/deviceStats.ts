@@ -3,6 +3,7 @@ import type { ProtectionTopology } from '../protectionTopology'
 import type { ConductorStats, DeviceStats, PvGroup } from '../rules/types'
 import type { ProtectiveDevice } from './devices'
 import { fmt } from './finite'
+import type { IdLookup } from './idLookup'
 import type { ScenarioSolve } from './solveScenario'
 import { batteryMaxChargeV, pvMaxVoltageV } from './sourceModels'
 
@@ -10,7 +11,7 @@ import { batteryMaxChargeV, pvMaxVoltageV } from './sourceModels'
  * The devices a load's current passes through, nearest first: the device protecting the conductor on
  * its positive terminal, then each device upstream of that one.
  */
-export function deviceChainOfPart(partId: string, design: Design, topology: ProtectionTopology, conductorsAt: Map<string, Design['conductors']>): string[] {
+export function deviceChainOfPart(partId: string, design: Design, topology: ProtectionTopology, conductorsAt: IdLookup<Design['conductors']>): string[] {
   const chain: string[] = []
   const pos = (conductorsAt.get(partId) ?? []).find((c) => {
     const end = c.from.partId === partId ? c.from : c.to
@@ -28,7 +29,7 @@ export function deviceChainOfPart(partId: string, design: Design, topology: Prot
 /** Worst case per device over the solved scenarios, fault current and the highest voltage it sees. */
 export function deviceStats(
   design: Design, devices: ProtectiveDevice[], solves: ScenarioSolve[], topology: ProtectionTopology,
-  deviceFaultA: Float64Array, pvGroups: PvGroup[], conductorsAt: Map<string, Design['conductors']>,
+  deviceFaultA: Float64Array, pvGroups: PvGroup[], conductorsAt: IdLookup<Design['conductors']>,
   conductors: ConductorStats[],
 ): DeviceStats[] {
   // Currents of intermittent loads (and everything during a motor start) do not count as continuous.

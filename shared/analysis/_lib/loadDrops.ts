@@ -2,6 +2,7 @@ import type { Design } from '../../design/schema'
 import type { ProtectionTopology } from '../protectionTopology'
 import type { LoadDrop } from '../rules/types'
 import { finite } from './finite'
+import type { IdLookup } from './idLookup'
 import type { ScenarioSolve } from './solveScenario'
 
 /**
@@ -9,7 +10,7 @@ import type { ScenarioSolve } from './solveScenario'
  * scenarios: the round-trip drop of the ABYC E-11 method (out on the positive, back on the negative).
  * The bank is the one the load's positive conductor is fed from (protection topology).
  */
-export function loadDrops(design: Design, solves: ScenarioSolve[], topology: ProtectionTopology, conductorsAt: Map<string, Design['conductors']>): LoadDrop[] {
+export function loadDrops(design: Design, solves: ScenarioSolve[], topology: ProtectionTopology, conductorsAt: IdLookup<Design['conductors']>): LoadDrop[] {
   const nominalV = design.settings.nominalVoltageV
   const worst = new Map<string, LoadDrop>()
   const batteryIds = new Set(design.parts.filter((p) => p.type === 'battery').map((p) => p.id))

@@ -5,6 +5,7 @@ import { conductorOhm } from './conductorFigures'
 import type { ProtectiveDevice } from './devices'
 import { batteryThevenin } from './sourceModels'
 import { nodeAt, type TerminalNodes } from './terminalNodes'
+import type { IdLookup } from './idLookup'
 import { UnionFind } from './unionFind'
 
 /** The part of the circuit no scenario changes: conductors, closed devices, switches, shunts, banks. */
@@ -18,8 +19,8 @@ export interface PassiveCircuit {
   conductorElementAt: Int32Array
   partElementAt: Int32Array
   deviceElementAt: Int32Array
-  /** Part id → its position in design.parts. */
-  partIndex: Map<string, number>
+  /** Part id → its position in design.parts (the last, for a repeated id). */
+  partIndex: IdLookup<number>
   batteryNegNodes: number[]
   problems: CompileProblem[]
   /** Per node, its group in the wiring + banks graph; hasBattery is indexed by that group. */
@@ -60,8 +61,7 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
     conductorElementAt[k] = e
     series.union(a, b)
   })
-  const partIndex = new Map<string, number>()
-  design.parts.forEach((part, k) => partIndex.set(part.id, k))
+  const partIndex: IdLookup<number> = { get: (id) => nodes.byPart.get(id)?.index }
   const setPartElement = (partId: string, e: number) => {
     partElementAt[partIndex.get(partId)!] = e
   }

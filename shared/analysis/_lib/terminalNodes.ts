@@ -1,5 +1,5 @@
 import { partTerminals, type TerminalInfo } from '../../design/catalogue'
-import type { Design, Part } from '../../design/schema'
+import type { Conductor, Design, Part } from '../../design/schema'
 import { UnionFind } from './unionFind'
 
 /** "partId:terminal", the key of a terminal in the analysis result (ScenarioResult.terminals). */
@@ -30,6 +30,10 @@ interface PartTerminalNodes {
   ids: string[]
   nodes: number[]
   terminals: TerminalInfo[]
+  /** Position of the part in design.parts (the last, for a repeated id). */
+  index: number
+  /** Conductors with an end on the part, design order (a conductor from the part to itself once); undefined: none. */
+  conductors: Conductor[] | undefined
 }
 
 export interface TerminalNodes {
@@ -48,6 +52,8 @@ export interface TerminalNodes {
   /** Per conductor (design order), the polarity of its from and to terminal (undefined: unknown terminal). */
   conductorFromPolarity: (TerminalInfo['polarity'] | undefined)[]
   conductorToPolarity: (TerminalInfo['polarity'] | undefined)[]
+  /** Conductor id → its position in design.conductors (the last, for a repeated id). */
+  conductorIndex: Map<string, number>
 }
 
 /** Node of a part's terminal, undefined when the part or the terminal does not exist. */
@@ -115,8 +121,9 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
         slotPart.push(part.id)
         slotTerminal.push(ids[i])
       }
-      byPart.set(part.id, (entry = { ids, nodes: slots, terminals }))
+      byPart.set(part.id, (entry = { ids, nodes: slots, terminals, index: k, conductors: undefined }))
     } else {
+      entry.index = k
       entry.terminals = terminals // the last part with an id gives its terminal list
       for (const t of terminals) {
         if (entry.ids.includes(t.id)) continue
@@ -161,18 +168,22 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
   const conductorTo = new Int32Array(count)
   const conductorFromPolarity: (TerminalInfo['polarity'] | undefined)[] = new Array(count)
   const conductorToPolarity: (TerminalInfo['polarity'] | undefined)[] = new Array(count)
-  // One part look-up per conductor end gives both the node and the polarity (no tuple per end).
+  // One part look-up per conductor end gives the node, the polarity and the part's conductor list.
   const conductors = design.conductors
+  const conductorIndex = new Map<string, number>()
   for (let i = 0; i < count; i++) {
     const c = conductors[i]
-    let entry = byPart.get(c.from.partId)
-    conductorFrom[i] = entry ? nodeIn(entry, c.from.terminal) : -1
-    conductorFromPolarity[i] = entry ? polarityIn(entry.terminals, c.from.terminal) : undefined
-    entry = byPart.get(c.to.partId)
-    conductorTo[i] = entry ? nodeIn(entry, c.to.terminal) : -1
-    conductorToPolarity[i] = entry ? polarityIn(entry.terminals, c.to.terminal) : undefined
+    conductorIndex.set(c.id, i)
+    const from = byPart.get(c.from.partId)
+    conductorFrom[i] = from ? nodeIn(from, c.from.terminal) : -1
+    conductorFromPolarity[i] = from ? polarityIn(from.terminals, c.from.terminal) : undefined
+    if (from) (from.conductors ??= []).push(c)
+    const to = byPart.get(c.to.partId)
+    conductorTo[i] = to ? nodeIn(to, c.to.terminal) : -1
+    conductorToPolarity[i] = to ? polarityIn(to.terminals, c.to.terminal) : undefined
+    if (to && c.to.partId !== c.from.partId) (to.conductors ??= []).push(c)
   }
-  const nodes = { nodeCount: firstSlotOfNode.length, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity }
+  const nodes = { nodeCount: firstSlotOfNode.length, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity, conductorIndex }
   let nodeOf: Map<string, number> | undefined
   let nodeNames: string[] | undefined
   Object.defineProperty(nodes, 'nodeNames', {

@@ -1,7 +1,10 @@
 import type { AmpacityResult } from '../../conductors/ampacity'
 import type { Conductor, Design, Part, PartOf } from '../../design/schema'
 import type { ProtectiveDevice } from '../_lib/devices'
+import type { IdLookup } from '../_lib/idLookup'
 import type { TerminalNodes } from '../_lib/terminalNodes'
+
+export type { IdLookup }
 import type { ConductorProtection, DeviceTopology, ProtectionTopology } from '../protectionTopology'
 import type { Finding, Severity } from '../types'
 
@@ -58,21 +61,16 @@ export interface PvGroup {
   arrays: PartOf<'pv-array'>[]
 }
 
-/** Read access by id (a Map, or a view over the analysis's arrays that builds no map of its own). */
-export interface IdLookup<V> {
-  get(id: string): V | undefined
-}
-
 export interface RuleContext {
   design: Design
   profile: Design['settings']['profile']
   nominalV: number
   conductors: ConductorStats[]
-  conductorById: Map<string, ConductorStats>
+  conductorById: IdLookup<ConductorStats>
   devices: DeviceStats[]
-  deviceById: Map<string, DeviceStats>
+  deviceById: IdLookup<DeviceStats>
   partById: IdLookup<Part>
-  conductorsAtPart: Map<string, Conductor[]>
+  conductorsAtPart: IdLookup<Conductor[]>
   loadDrops: LoadDrop[]
   /** Running current of each load: the highest outside motor starts, else its rating at nominal voltage. */
   loadRunningA: IdLookup<number>
