@@ -5,14 +5,15 @@ import {
   LOCAL_ORIGIN,
   createDesignMutations,
   isLayoutOnlyChange,
-  readDesignFromDoc,
   writeDesignToDoc,
   type DesignMutations,
 } from '@shared/collab/designYDoc'
+import { createDesignReader } from './designDocReader'
 
 export interface DesignDocHandle {
   doc: Y.Doc
-  /** Plain snapshot of the document, replaced after every transaction. */
+  /** Plain snapshot of the document, replaced after every transaction; parts, conductors and
+   * sections the transaction did not touch keep their objects from the previous snapshot. */
   design: ShallowRef<Design>
   /** Bumps on every change that can affect the electrical analysis (not on moves). */
   electricalVersion: Ref<number>
@@ -35,7 +36,8 @@ export function useDesignDoc(initial: Design | { doc: Y.Doc }): DesignDocHandle 
   // A live design arrives as a synced Y.Doc (the server's state); a local one is written in.
   const doc = 'doc' in initial ? initial.doc : new Y.Doc()
   if (!('doc' in initial)) writeDesignToDoc(doc, initial)
-  const design = shallowRef<Design>(readDesignFromDoc(doc))
+  const readDesign = createDesignReader(doc)
+  const design = shallowRef<Design>(readDesign())
   const electricalVersion = ref(0)
   const version = ref(0)
   const undoDepth = ref(0)
@@ -57,7 +59,7 @@ export function useDesignDoc(initial: Design | { doc: Y.Doc }): DesignDocHandle 
     if (transaction.changed.size === 0) return
     const events: Y.YEvent<Y.AbstractType<unknown>>[] = []
     transaction.changedParentTypes.forEach((list) => events.push(...list))
-    design.value = readDesignFromDoc(doc)
+    design.value = readDesign(transaction.changed)
     version.value++
     if (!isLayoutOnlyChange(events)) electricalVersion.value++
   }
