@@ -2,6 +2,8 @@ import { onScopeDispose, ref, shallowRef, watch, type Ref, type ShallowRef } fro
 import type { Design } from '@shared/design/schema'
 import type { AnalysisResult } from '@/components/editor/model/analysisTypes'
 import type { AnalysisRequest, AnalysisResponse } from '@/workers/analysis.worker'
+import { createDesignEncoder } from '@/workers/designTransfer'
+import { createResultDecoder } from '@/workers/resultTransfer'
 
 export interface DesignAnalysis {
   result: ShallowRef<AnalysisResult | null>
@@ -31,19 +33,43 @@ export function useDesignAnalysis(design: Readonly<Ref<Design>>, electricalVersi
   let queued = false
   let timer: ReturnType<typeof setTimeout> | undefined
 
+  // Only what changed travels each way; both ends keep the previous message's content.
+  const designEncoder = createDesignEncoder()
+  let decodeResult = createResultDecoder()
+  let fresh = true
+
   function send() {
     inFlight = true
     queued = false
     sentSeq++
-    const request: AnalysisRequest = { seq: sentSeq, design: design.value }
-    // Structured clone of a plain object; the Vue snapshot is never reactive-proxied (shallowRef).
+    const request: AnalysisRequest = { seq: sentSeq, fresh, design: designEncoder.encode(design.value) }
+    fresh = false
     worker.postMessage(request)
+  }
+  /** After a failure either end may have lost track: start both channels afresh. */
+  function resync() {
+    designEncoder.reset()
+    decodeResult = createResultDecoder()
+    fresh = true
+  }
+
+  /** Every result is decoded, a superseded one too: the next one is sent relative to it. */
+  function readResponse(response: AnalysisResponse): { ok: true; result: AnalysisResult; elapsedMs: number } | { ok: false; message: string } {
+    if (!response.ok) return response
+    try {
+      return { ok: true, result: decodeResult(response.result), elapsedMs: response.elapsedMs }
+    } catch (decodeError) {
+      // The shown result stays; the design is analysed again from a full copy.
+      resync()
+      if (response.seq === sentSeq) queued = true
+      return { ok: false, message: decodeError instanceof Error ? decodeError.message : String(decodeError) }
+    }
   }
 
   worker.onmessage = (event: MessageEvent<AnalysisResponse>) => {
-    const response = event.data
+    const response = readResponse(event.data)
     inFlight = false
-    if (response.seq === sentSeq) {
+    if (event.data.seq === sentSeq) {
       if (response.ok) {
         result.value = response.result
         lastElapsedMs.value = response.elapsedMs
@@ -58,6 +84,7 @@ export function useDesignAnalysis(design: Readonly<Ref<Design>>, electricalVersi
   worker.onerror = (event) => {
     inFlight = false
     error.value = event.message || 'The analysis could not run'
+    resync()
   }
 
   // Leading edge: an edit made while idle is analysed at once; edits within the next window are
