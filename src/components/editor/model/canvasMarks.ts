@@ -45,14 +45,35 @@ function syncMap<V>(target: Map<string, V>, next: Map<string, V>, same: (a: V, b
 
 const sameFigures = (a: ConductorFigures, b: ConductorFigures) => a.currentText === b.currentText && a.dropText === b.dropText
 
+// Text worked out once per result record: the worker hands unchanged records back as the same
+// objects, so after an edit only the few records that changed are formatted again.
+const figuresOfRun = new WeakMap<object, ConductorFigures>()
+const voltsTextOf = new WeakMap<object, Map<string, string>>()
+
+function figuresOf(run: { currentA: number; dropPercent: number }): ConductorFigures {
+  let figures = figuresOfRun.get(run)
+  if (!figures) {
+    figures = { currentText: formatAuto(Math.abs(run.currentA), 'A'), dropText: formatAuto(run.dropPercent, '%') }
+    figuresOfRun.set(run, figures)
+  }
+  return figures
+}
+
+function voltsTextFor(terminals: Record<string, number>): Map<string, string> {
+  let texts = voltsTextOf.get(terminals)
+  if (!texts) {
+    texts = new Map(Object.entries(terminals).map(([key, volts]) => [key, formatAuto(volts, 'V')]))
+    voltsTextOf.set(terminals, texts)
+  }
+  return texts
+}
+
 export function updateCanvasMarks(marks: CanvasMarks, index: AnalysisIndex): void {
   syncMap(marks.worstByPart, index.worstByPart)
   syncMap(marks.worstByConductor, index.worstByConductor)
   syncMap(marks.findingCountByPart, new Map([...index.findingsByPart].map(([id, list]) => [id, list.length])))
   const figures = new Map<string, ConductorFigures>()
-  for (const [id, run] of index.conductorRun) {
-    figures.set(id, { currentText: formatAuto(Math.abs(run.currentA), 'A'), dropText: formatAuto(run.dropPercent, '%') })
-  }
+  for (const [id, run] of index.conductorRun) figures.set(id, figuresOf(run))
   syncMap(marks.figuresByConductor, figures, sameFigures)
-  syncMap(marks.terminalVoltsText, new Map(Object.entries(index.terminals).map(([key, volts]) => [key, formatAuto(volts, 'V')])))
+  syncMap(marks.terminalVoltsText, voltsTextFor(index.terminals))
 }
