@@ -4,7 +4,7 @@ import type { Circuit, CircuitElement } from '../solver/circuit'
 import type { SolverCache } from '../solver/solverCache'
 import { protectiveDevices, type ProtectiveDevice } from './_lib/devices'
 import { finite } from './_lib/finite'
-import { buildPassiveCircuit, type PassiveCircuit } from './_lib/passiveCircuit'
+import { buildPassiveCircuit, elementIdMap, type PassiveCircuit } from './_lib/passiveCircuit'
 import { buildTerminalNodes, nodeAt, partPairNodes, type TerminalNodes } from './_lib/terminalNodes'
 
 /** Who an element stands for: a part (and which of its elements) or a conductor. */
@@ -193,28 +193,72 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
 
   const elements = base.elements.concat(added)
   const owners = base.owners.concat(addedOwners)
-  const circuit: Circuit = { nodeCount: nodes.nodeCount, elements }
-  // Node names (for netlists and messages) are made when first read: the analysis never reads them.
-  Object.defineProperty(circuit, 'nodeNames', { enumerable: true, get: () => nodes.nodeNames })
-  const compiled: Omit<CompiledCircuit, 'partElement' | 'conductorElement' | 'deviceElement'> = {
-    circuit,
-    nodes, owners, conductorElementAt, partElementAt, deviceElementAt, batteryNegNodes, problems,
+  return new CompiledScenario(
+    { circuit: new ScenarioCircuit(nodes, elements), nodes, owners, conductorElementAt, partElementAt, deviceElementAt, batteryNegNodes, problems },
+    base, design.parts,
+  )
+}
+
+/** A scenario's circuit whose node names (for netlists and messages) are made when first read: the analysis never reads them. */
+class ScenarioCircuit implements Circuit {
+  readonly nodeCount: number
+  readonly elements: CircuitElement[]
+  private readonly nodes: TerminalNodes
+
+  constructor(nodes: TerminalNodes, elements: CircuitElement[]) {
+    this.nodeCount = nodes.nodeCount
+    this.elements = elements
+    this.nodes = nodes
   }
-  // The passive circuit's id-keyed maps, read through (and so built) only when someone reads them.
-  Object.defineProperty(compiled, 'conductorElement', { enumerable: true, get: () => base.conductorElement })
-  Object.defineProperty(compiled, 'deviceElement', { enumerable: true, get: () => base.deviceElement })
-  // The id-keyed view of partElementAt, built on first read (the analysis reads positions only).
-  let partElement: Map<string, number> | undefined
-  return Object.defineProperty(compiled, 'partElement', {
-    enumerable: true,
-    get: () => {
-      if (!partElement) {
-        partElement = new Map()
-        design.parts.forEach((part, k) => { if (partElementAt[k] >= 0) partElement!.set(part.id, partElementAt[k]) })
-      }
-      return partElement
-    },
-  }) as CompiledCircuit
+
+  get nodeNames(): string[] {
+    return this.nodes.nodeNames
+  }
+}
+
+type CompiledFields = Omit<CompiledCircuit, 'partElement' | 'conductorElement' | 'deviceElement'>
+
+/**
+ * A compiled scenario whose id-keyed maps are built on first read (the analysis reads positions only).
+ * Classes, not per-object getters: every scenario's objects then share one shape (see TerminalNodeTable).
+ */
+class CompiledScenario implements CompiledCircuit {
+  readonly circuit: Circuit
+  readonly nodes: TerminalNodes
+  readonly owners: ElementOwner[]
+  readonly conductorElementAt: Int32Array
+  readonly partElementAt: Int32Array
+  readonly deviceElementAt: Int32Array
+  readonly batteryNegNodes: number[]
+  readonly problems: CompileProblem[]
+  private readonly passive: PassiveCircuit
+  private readonly parts: readonly { id: string }[]
+  private byPart: Map<string, number> | undefined = undefined
+
+  constructor(f: CompiledFields, passive: PassiveCircuit, parts: readonly { id: string }[]) {
+    this.circuit = f.circuit
+    this.nodes = f.nodes
+    this.owners = f.owners
+    this.conductorElementAt = f.conductorElementAt
+    this.partElementAt = f.partElementAt
+    this.deviceElementAt = f.deviceElementAt
+    this.batteryNegNodes = f.batteryNegNodes
+    this.problems = f.problems
+    this.passive = passive
+    this.parts = parts
+  }
+
+  get conductorElement(): Map<string, number> {
+    return this.passive.conductorElement
+  }
+
+  get deviceElement(): Map<string, number> {
+    return this.passive.deviceElement
+  }
+
+  get partElement(): Map<string, number> {
+    return (this.byPart ??= elementIdMap(this.parts, this.partElementAt))
+  }
 }
 
 export { pvArraysByController } from './_lib/passiveCircuit'

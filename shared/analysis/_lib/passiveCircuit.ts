@@ -107,32 +107,72 @@ export function buildPassiveCircuit(design: Design, nodes: TerminalNodes, device
 
   const ownIds: string[] = new Array(design.parts.length)
   const ownOwners: ElementOwner[] = new Array(design.parts.length)
-  const passive = {
+  return new PassiveNet({
     elements, owners, conductorElementAt, partElementAt, deviceElementAt, partIndex,
     batteryNegNodes, problems, suppliedRoot, hasBattery,
     arraysOfController: pvArraysByController(design, nodes, series),
     ownElementId: (k: number) => (ownIds[k] ??= `p:${design.parts[k].id}`),
     ownOwner: (k: number) => (ownOwners[k] ??= { kind: 'part', id: design.parts[k].id, role: 'main' }),
-  }
-  // The id-keyed views (tests, references, tools) are built on first read; the analysis reads positions.
-  lazyIdMap(passive, 'conductorElement', design.conductors, conductorElementAt)
-  lazyIdMap(passive, 'deviceElement', devices, deviceElementAt)
-  return passive as typeof passive & Pick<PassiveCircuit, 'conductorElement' | 'deviceElement'>
+  }, design.conductors, devices)
 }
 
-/** Defines `key` on `target` as a Map id → element (items in order, −1 left out), built when first read. */
-function lazyIdMap(target: object, key: string, items: readonly { id: string }[], elementAt: Int32Array): void {
-  let map: Map<string, number> | undefined
-  Object.defineProperty(target, key, {
-    enumerable: true,
-    get: () => {
-      if (!map) {
-        map = new Map()
-        for (let k = 0; k < items.length; k++) if (elementAt[k] >= 0) map.set(items[k].id, elementAt[k])
-      }
-      return map
-    },
-  })
+/** Map id → element for items in order (−1 left out; the last of a repeated id wins). */
+export function elementIdMap(items: readonly { id: string }[], elementAt: Int32Array): Map<string, number> {
+  const map = new Map<string, number>()
+  for (let k = 0; k < items.length; k++) if (elementAt[k] >= 0) map.set(items[k].id, elementAt[k])
+  return map
+}
+
+type PassiveFields = Omit<PassiveCircuit, 'conductorElement' | 'deviceElement'>
+
+/**
+ * The passive circuit with its id-keyed views (tests, references, tools) built on first read: the
+ * analysis reads positions. A class, so every analysis's object has one shape (see TerminalNodeTable).
+ */
+class PassiveNet implements PassiveCircuit {
+  readonly elements: CircuitElement[]
+  readonly owners: ElementOwner[]
+  readonly conductorElementAt: Int32Array
+  readonly partElementAt: Int32Array
+  readonly deviceElementAt: Int32Array
+  readonly partIndex: IdLookup<number>
+  readonly batteryNegNodes: number[]
+  readonly problems: CompileProblem[]
+  readonly suppliedRoot: Int32Array
+  readonly hasBattery: Uint8Array
+  readonly arraysOfController: Map<string, PartOf<'pv-array'>[]>
+  readonly ownElementId: (k: number) => string
+  readonly ownOwner: (k: number) => ElementOwner
+  private readonly conductors: readonly { id: string }[]
+  private readonly devices: readonly { id: string }[]
+  private byConductor: Map<string, number> | undefined = undefined
+  private byDevice: Map<string, number> | undefined = undefined
+
+  constructor(f: PassiveFields, conductors: readonly { id: string }[], devices: readonly { id: string }[]) {
+    this.elements = f.elements
+    this.owners = f.owners
+    this.conductorElementAt = f.conductorElementAt
+    this.partElementAt = f.partElementAt
+    this.deviceElementAt = f.deviceElementAt
+    this.partIndex = f.partIndex
+    this.batteryNegNodes = f.batteryNegNodes
+    this.problems = f.problems
+    this.suppliedRoot = f.suppliedRoot
+    this.hasBattery = f.hasBattery
+    this.arraysOfController = f.arraysOfController
+    this.ownElementId = f.ownElementId
+    this.ownOwner = f.ownOwner
+    this.conductors = conductors
+    this.devices = devices
+  }
+
+  get conductorElement(): Map<string, number> {
+    return (this.byConductor ??= elementIdMap(this.conductors, this.conductorElementAt))
+  }
+
+  get deviceElement(): Map<string, number> {
+    return (this.byDevice ??= elementIdMap(this.devices, this.deviceElementAt))
+  }
 }
 
 /** PV arrays whose positive reaches a controller's PV input through conductors and closed devices. */

@@ -93,7 +93,11 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
   const partCurrentA = new Float64Array(design.parts.length)
   for (let i = 0; i < design.parts.length; i++) {
     const e = partAt[i]
-    partCurrentA[i] = e >= 0 ? finite(elementCurrentA[e]) : (panelCurrent.get(design.parts[i].id) ?? 0)
+    if (e >= 0) partCurrentA[i] = finite(elementCurrentA[e])
+  }
+  // Fuse panels (parts without an element of their own): only when the design has any.
+  if (panelCurrent.size > 0) {
+    for (let i = 0; i < design.parts.length; i++) if (partAt[i] < 0) partCurrentA[i] = panelCurrent.get(design.parts[i].id) ?? 0
   }
   const partRecords = (): ScenarioPartResult[] => ids.parts.map((id, i) => {
     const e = partAt[i]

@@ -183,34 +183,70 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
     conductorToPolarity[i] = to ? polarityIn(to.terminals, c.to.terminal) : undefined
     if (to && c.to.partId !== c.from.partId) (to.conductors ??= []).push(c)
   }
-  const nodes = { nodeCount: firstSlotOfNode.length, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity, conductorIndex }
-  let nodeOf: Map<string, number> | undefined
-  let nodeNames: string[] | undefined
-  Object.defineProperty(nodes, 'nodeNames', {
-    enumerable: true,
-    get: () => (nodeNames ??= firstSlotOfNode.map((i) => terminalKey(slotPart[i], slotTerminal[i]))),
-  })
-  let terminalsOf: Map<string, TerminalInfo[]> | undefined
-  Object.defineProperty(nodes, 'terminalsOf', {
-    enumerable: true,
-    get: () => {
-      if (!terminalsOf) {
-        terminalsOf = new Map()
-        for (const [id, entry] of byPart) terminalsOf.set(id, entry.terminals)
-      }
-      return terminalsOf
-    },
-  })
-  return Object.defineProperty(nodes, 'nodeOf', {
-    enumerable: true,
-    get: () => {
-      if (!nodeOf) {
-        nodeOf = new Map()
-        for (let i = 0; i < slotPart.length; i++) nodeOf.set(terminalKey(slotPart[i], slotTerminal[i]), nodeOfSlot[i])
-      }
-      return nodeOf
-    },
-  }) as TerminalNodes
+  return new TerminalNodeTable(
+    { nodeCount: firstSlotOfNode.length, byPart, conductorFrom, conductorTo, conductorFromPolarity, conductorToPolarity, conductorIndex },
+    { slotPart, slotTerminal, nodeOfSlot, firstSlotOfNode },
+  )
+}
+
+/** Terminal slots in numbering order: the part id and terminal id of each, its node, and each node's first slot. */
+interface TerminalSlots {
+  slotPart: string[]
+  slotTerminal: string[]
+  nodeOfSlot: Int32Array
+  firstSlotOfNode: number[]
+}
+
+/**
+ * TerminalNodes whose string-keyed views are made on first read. A class, so every analysis's table
+ * has the same shape (per-object getters would give each one a shape of its own, and every function
+ * reading it would see a new one each time).
+ */
+class TerminalNodeTable implements TerminalNodes {
+  readonly nodeCount: number
+  readonly byPart: Map<string, PartTerminalNodes>
+  readonly conductorFrom: Int32Array
+  readonly conductorTo: Int32Array
+  readonly conductorFromPolarity: (TerminalInfo['polarity'] | undefined)[]
+  readonly conductorToPolarity: (TerminalInfo['polarity'] | undefined)[]
+  readonly conductorIndex: Map<string, number>
+  private readonly slots: TerminalSlots
+  private names: string[] | undefined = undefined
+  private keyed: Map<string, number> | undefined = undefined
+  private lists: Map<string, TerminalInfo[]> | undefined = undefined
+
+  constructor(fields: Omit<TerminalNodes, 'nodeNames' | 'nodeOf' | 'terminalsOf'>, slots: TerminalSlots) {
+    this.nodeCount = fields.nodeCount
+    this.byPart = fields.byPart
+    this.conductorFrom = fields.conductorFrom
+    this.conductorTo = fields.conductorTo
+    this.conductorFromPolarity = fields.conductorFromPolarity
+    this.conductorToPolarity = fields.conductorToPolarity
+    this.conductorIndex = fields.conductorIndex
+    this.slots = slots
+  }
+
+  get nodeNames(): string[] {
+    const { slotPart, slotTerminal, firstSlotOfNode } = this.slots
+    return (this.names ??= firstSlotOfNode.map((i) => terminalKey(slotPart[i], slotTerminal[i])))
+  }
+
+  get nodeOf(): Map<string, number> {
+    if (!this.keyed) {
+      const { slotPart, slotTerminal, nodeOfSlot } = this.slots
+      this.keyed = new Map()
+      for (let i = 0; i < slotPart.length; i++) this.keyed.set(terminalKey(slotPart[i], slotTerminal[i]), nodeOfSlot[i])
+    }
+    return this.keyed
+  }
+
+  get terminalsOf(): Map<string, TerminalInfo[]> {
+    if (!this.lists) {
+      this.lists = new Map()
+      for (const [id, entry] of this.byPart) this.lists.set(id, entry.terminals)
+    }
+    return this.lists
+  }
 }
 
 /** The two terminals whose voltage is a part's own voltage, and across which its own element sits. */

@@ -114,15 +114,29 @@ export function ldlNumeric(
   return -1
 }
 
-/** Solves L D Lᵀ x = b in place. */
+/**
+ * Solves L D Lᵀ x = b in place. The three sweeps are functions of their own: each is then compiled
+ * with its own type feedback, instead of the later sweeps being reached without any inside code
+ * optimised while the first one ran (which made the engine drop that code on every solve).
+ */
 export function ldlSolve(factor: LdlFactor, x: Float64Array): void {
   const { li, lx, d } = factor
   const { n, lp } = factor.symbolic
+  forwardSweep(n, lp, li, lx, x)
+  for (let j = 0; j < n; j++) x[j] /= d[j]
+  backwardSweep(n, lp, li, lx, x)
+}
+
+/** x ← L⁻¹ x (unit lower triangle, by columns). */
+function forwardSweep(n: number, lp: Int32Array, li: Int32Array, lx: Float64Array, x: Float64Array): void {
   for (let j = 0; j < n; j++) {
     const xj = x[j]
     if (xj !== 0) for (let p = lp[j]; p < lp[j + 1]; p++) x[li[p]] -= lx[p] * xj
   }
-  for (let j = 0; j < n; j++) x[j] /= d[j]
+}
+
+/** x ← L⁻ᵀ x. */
+function backwardSweep(n: number, lp: Int32Array, li: Int32Array, lx: Float64Array, x: Float64Array): void {
   for (let j = n - 1; j >= 0; j--) {
     let xj = x[j]
     for (let p = lp[j]; p < lp[j + 1]; p++) xj -= lx[p] * x[li[p]]
