@@ -120,10 +120,9 @@ export function solveScenario(design: Design, scenario: Scenario, prepared: Prep
     }
     return { ...p, elementIds: [...p.elementIds, ...across] }
   })
-  const findings = [
-    ...solverProblemFindings(problems, scenario.id, scenario.name),
-    ...compileProblemFindings(compiled.problems, scenario.id),
-  ]
+  // Appended, not spread into a literal: two lists of different element kinds made the engine drop this function's code.
+  const findings = solverProblemFindings(problems, scenario.id, scenario.name)
+  for (const f of compileProblemFindings(compiled.problems, scenario.id)) findings.push(f)
   const broken = op.problems.some((p) => p.kind === 'shorted-source' || p.kind === 'source-loop' || p.kind === 'invalid-element')
   const status: ScenarioResult['status'] = op.status !== 'ok' ? 'not-converged' : broken ? 'failed' : 'ok'
   return {
