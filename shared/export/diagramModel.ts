@@ -3,6 +3,7 @@ import { getConductorSize } from '../conductors/sizes'
 import type { Conductor, Design } from '../design/schema'
 import { designCautions } from './cautions'
 import { fitText, INK, MUTED, NEGATIVE, POSITIVE, SEVERITY_COLOURS, textWidth, wrapText, wrapTextLines, type DiagramModel, type Point, type Primitive } from './diagramPrimitives'
+import { placeLabel, type Rect } from './labelPlacement'
 import { partBox, stubOf, type PartBox, type PlacedTerminal } from './partGeometry'
 import { partRatingText, partSymbol } from './partSymbols'
 import { titleBlock, titleBlockHeight, TITLE_BLOCK_WIDTH, type TitleBlockInfo } from './titleBlock'
@@ -43,17 +44,6 @@ function route(from: ReturnType<PartBox['terminals']['get']>, to: ReturnType<Par
   return [a, sa, ...middle, sb, b]
 }
 
-function longestSegmentMiddle(points: Point[]): { x: number; y: number; horizontal: boolean } {
-  let best = { x: points[0][0], y: points[0][1], horizontal: true, length: -1 }
-  for (let i = 1; i < points.length; i++) {
-    const [x1, y1] = points[i - 1]
-    const [x2, y2] = points[i]
-    const length = Math.hypot(x2 - x1, y2 - y1)
-    if (length > best.length) best = { x: (x1 + x2) / 2, y: (y1 + y2) / 2, horizontal: Math.abs(y2 - y1) < 1e-6, length }
-  }
-  return best
-}
-
 function marks(numbers: number[], findings: Finding[], x: number, y: number): Primitive[] {
   return numbers.flatMap((number, i) => {
     const colour = SEVERITY_COLOURS[findings[number - 1].severity]
@@ -72,8 +62,11 @@ export function buildDiagramModel(design: Design, analysis: AnalysisResult, opti
   const numbersFor = (predicate: (f: Finding) => boolean) => findings.flatMap((f, i) => (predicate(f) ? [i + 1] : []))
 
   const drawn: Primitive[] = []
-  // Conductors under the parts, their labels and marks above them.
+  // Conductors under the parts, their labels and marks above them; a label goes where it covers no
+  // part (terminal names included) and no earlier label.
   const labels: Primitive[] = []
+  const partRects = [...boxes.values()].map((b) => ({ x: b.x, y: b.y, w: b.width, h: b.height }))
+  const takenRects: Rect[] = []
   for (const c of design.conductors) {
     const from = boxes.get(c.from.partId)?.terminals.get(c.from.terminal)
     const to = boxes.get(c.to.partId)?.terminals.get(c.to.terminal)
@@ -82,14 +75,19 @@ export function buildDiagramModel(design: Design, analysis: AnalysisResult, opti
     const negative = from?.polarity === 'negative' || to?.polarity === 'negative'
     const stroke = negative ? NEGATIVE : POSITIVE
     drawn.push({ kind: 'line', points, stroke, strokeWidth: 1.6, dash: negative ? [6, 3] : undefined })
-    const at = longestSegmentMiddle(points)
     const text = conductorLabel(c)
     const w = textWidth(text, 9) + 6
-    const lx = at.horizontal ? at.x : at.x + w / 2 + 3
-    const ly = at.horizontal ? at.y - 4 : at.y
+    const numbers = numbersFor((f) => f.conductorIds.includes(c.id))
+    const { x: lx, y: ly, rect, leaderTo } = placeLabel(points, w, numbers.length > 0 ? 20 : 0, partRects, takenRects)
+    if (leaderTo) {
+      // Moved away for room: a thin leader from the label's nearer edge back to its conductor.
+      const edgeY = leaderTo[1] < rect.y ? rect.y : leaderTo[1] > rect.y + rect.h ? rect.y + rect.h : leaderTo[1]
+      const edgeX = leaderTo[0] < lx - w / 2 ? lx - w / 2 : leaderTo[0] > lx + w / 2 ? lx + w / 2 : leaderTo[0]
+      labels.push({ kind: 'line', points: [[edgeX, edgeY], leaderTo], stroke, strokeWidth: 0.6 })
+    }
     labels.push({ kind: 'rect', x: lx - w / 2, y: ly - 8, w, h: 11, stroke: '#ffffff', fill: '#ffffff', strokeWidth: 0 })
     labels.push({ kind: 'text', x: lx, y: ly, text, size: 9, anchor: 'middle', fill: stroke })
-    labels.push(...marks(numbersFor((f) => f.conductorIds.includes(c.id)), findings, lx + w / 2 + 10, ly - 4))
+    labels.push(...marks(numbers, findings, lx + w / 2 + 10, ly - 4))
   }
   for (const box of boxes.values()) drawn.push(...partPrimitives(box, numbersFor((f) => f.partIds.includes(box.part.id)), findings))
   drawn.push(...labels)
