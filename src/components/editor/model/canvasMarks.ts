@@ -68,12 +68,20 @@ function voltsTextFor(terminals: Record<string, number>): Map<string, string> {
   return texts
 }
 
+/** The scenario records each marks object was last synced from: the same records, nothing to do. */
+const syncedFrom = new WeakMap<CanvasMarks, { conductors: unknown; terminals: unknown }>()
+
 export function updateCanvasMarks(marks: CanvasMarks, index: AnalysisIndex): void {
   syncMap(marks.worstByPart, index.worstByPart)
   syncMap(marks.worstByConductor, index.worstByConductor)
   syncMap(marks.findingCountByPart, new Map([...index.findingsByPart].map(([id, list]) => [id, list.length])))
-  const figures = new Map<string, ConductorFigures>()
-  for (const [id, run] of index.conductorRun) figures.set(id, figuresOf(run))
-  syncMap(marks.figuresByConductor, figures, sameFigures)
-  syncMap(marks.terminalVoltsText, voltsTextFor(index.terminals))
+  const last = syncedFrom.get(marks)
+  const conductors = index.scenario?.conductors ?? null
+  if (conductors === null || last?.conductors !== conductors) {
+    const figures = new Map<string, ConductorFigures>()
+    for (const [id, run] of index.conductorRun) figures.set(id, figuresOf(run))
+    syncMap(marks.figuresByConductor, figures, sameFigures)
+  }
+  if (last?.terminals !== index.terminals) syncMap(marks.terminalVoltsText, voltsTextFor(index.terminals))
+  syncedFrom.set(marks, { conductors, terminals: index.terminals })
 }
