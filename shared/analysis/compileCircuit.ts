@@ -202,13 +202,9 @@ export function compileCircuit(design: Design, scenario: Scenario, prepared?: Pr
 /** A scenario's circuit whose node names (for netlists and messages) are made when first read: the analysis never reads them. */
 class ScenarioCircuit implements Circuit {
   readonly nodeCount: number
-  readonly elements: CircuitElement[]
-  private readonly nodes: TerminalNodes
 
-  constructor(nodes: TerminalNodes, elements: CircuitElement[]) {
+  constructor(private readonly nodes: TerminalNodes, readonly elements: CircuitElement[]) {
     this.nodeCount = nodes.nodeCount
-    this.elements = elements
-    this.nodes = nodes
   }
 
   get nodeNames(): string[] {
@@ -222,30 +218,12 @@ type CompiledFields = Omit<CompiledCircuit, 'partElement' | 'conductorElement' |
  * A compiled scenario whose id-keyed maps are built on first read (the analysis reads positions only).
  * Classes, not per-object getters: every scenario's objects then share one shape (see TerminalNodeTable).
  */
+interface CompiledScenario extends CompiledFields {}
 class CompiledScenario implements CompiledCircuit {
-  readonly circuit: Circuit
-  readonly nodes: TerminalNodes
-  readonly owners: ElementOwner[]
-  readonly conductorElementAt: Int32Array
-  readonly partElementAt: Int32Array
-  readonly deviceElementAt: Int32Array
-  readonly batteryNegNodes: number[]
-  readonly problems: CompileProblem[]
-  private readonly passive: PassiveCircuit
-  private readonly parts: readonly { id: string }[]
   private byPart: Map<string, number> | undefined = undefined
 
-  constructor(f: CompiledFields, passive: PassiveCircuit, parts: readonly { id: string }[]) {
-    this.circuit = f.circuit
-    this.nodes = f.nodes
-    this.owners = f.owners
-    this.conductorElementAt = f.conductorElementAt
-    this.partElementAt = f.partElementAt
-    this.deviceElementAt = f.deviceElementAt
-    this.batteryNegNodes = f.batteryNegNodes
-    this.problems = f.problems
-    this.passive = passive
-    this.parts = parts
+  constructor(fields: CompiledFields, private readonly passive: PassiveCircuit, private readonly parts: readonly { id: string }[]) {
+    Object.assign(this, fields) // always the same fields in the same order: one shape
   }
 
   get conductorElement(): Map<string, number> {

@@ -129,41 +129,13 @@ type PassiveFields = Omit<PassiveCircuit, 'conductorElement' | 'deviceElement'>
  * The passive circuit with its id-keyed views (tests, references, tools) built on first read: the
  * analysis reads positions. A class, so every analysis's object has one shape (see TerminalNodeTable).
  */
+interface PassiveNet extends PassiveFields {}
 class PassiveNet implements PassiveCircuit {
-  readonly elements: CircuitElement[]
-  readonly owners: ElementOwner[]
-  readonly conductorElementAt: Int32Array
-  readonly partElementAt: Int32Array
-  readonly deviceElementAt: Int32Array
-  readonly partIndex: IdLookup<number>
-  readonly batteryNegNodes: number[]
-  readonly problems: CompileProblem[]
-  readonly suppliedRoot: Int32Array
-  readonly hasBattery: Uint8Array
-  readonly arraysOfController: Map<string, PartOf<'pv-array'>[]>
-  readonly ownElementId: (k: number) => string
-  readonly ownOwner: (k: number) => ElementOwner
-  private readonly conductors: readonly { id: string }[]
-  private readonly devices: readonly { id: string }[]
   private byConductor: Map<string, number> | undefined = undefined
   private byDevice: Map<string, number> | undefined = undefined
 
-  constructor(f: PassiveFields, conductors: readonly { id: string }[], devices: readonly { id: string }[]) {
-    this.elements = f.elements
-    this.owners = f.owners
-    this.conductorElementAt = f.conductorElementAt
-    this.partElementAt = f.partElementAt
-    this.deviceElementAt = f.deviceElementAt
-    this.partIndex = f.partIndex
-    this.batteryNegNodes = f.batteryNegNodes
-    this.problems = f.problems
-    this.suppliedRoot = f.suppliedRoot
-    this.hasBattery = f.hasBattery
-    this.arraysOfController = f.arraysOfController
-    this.ownElementId = f.ownElementId
-    this.ownOwner = f.ownOwner
-    this.conductors = conductors
-    this.devices = devices
+  constructor(fields: PassiveFields, private readonly conductors: readonly { id: string }[], private readonly devices: readonly { id: string }[]) {
+    Object.assign(this, fields) // always the same fields in the same order: one shape
   }
 
   get conductorElement(): Map<string, number> {

@@ -202,28 +202,14 @@ interface TerminalSlots {
  * has the same shape (per-object getters would give each one a shape of its own, and every function
  * reading it would see a new one each time).
  */
+interface TerminalNodeTable extends Omit<TerminalNodes, 'nodeNames' | 'nodeOf' | 'terminalsOf'> {}
 class TerminalNodeTable implements TerminalNodes {
-  readonly nodeCount: number
-  readonly byPart: Map<string, PartTerminalNodes>
-  readonly conductorFrom: Int32Array
-  readonly conductorTo: Int32Array
-  readonly conductorFromPolarity: (TerminalInfo['polarity'] | undefined)[]
-  readonly conductorToPolarity: (TerminalInfo['polarity'] | undefined)[]
-  readonly conductorIndex: Map<string, number>
-  private readonly slots: TerminalSlots
   private names: string[] | undefined = undefined
   private keyed: Map<string, number> | undefined = undefined
   private lists: Map<string, TerminalInfo[]> | undefined = undefined
 
-  constructor(fields: Omit<TerminalNodes, 'nodeNames' | 'nodeOf' | 'terminalsOf'>, slots: TerminalSlots) {
-    this.nodeCount = fields.nodeCount
-    this.byPart = fields.byPart
-    this.conductorFrom = fields.conductorFrom
-    this.conductorTo = fields.conductorTo
-    this.conductorFromPolarity = fields.conductorFromPolarity
-    this.conductorToPolarity = fields.conductorToPolarity
-    this.conductorIndex = fields.conductorIndex
-    this.slots = slots
+  constructor(fields: Omit<TerminalNodes, 'nodeNames' | 'nodeOf' | 'terminalsOf'>, private readonly slots: TerminalSlots) {
+    Object.assign(this, fields) // always the same fields in the same order: one shape
   }
 
   get nodeNames(): string[] {
