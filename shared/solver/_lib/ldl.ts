@@ -115,16 +115,21 @@ export function ldlNumeric(
 }
 
 /**
- * Solves L D Lᵀ x = b in place. The three sweeps are functions of their own: each is then compiled
- * with its own type feedback, instead of the later sweeps being reached without any inside code
- * optimised while the first one ran (which made the engine drop that code on every solve).
+ * Solves L D Lᵀ x = b in place. The three sweeps are functions of their own, each compiled with its
+ * own type feedback: with the loops inline, the code the engine optimised while the first loop ran
+ * met the later ones without feedback and was dropped on every solve.
  */
 export function ldlSolve(factor: LdlFactor, x: Float64Array): void {
   const { li, lx, d } = factor
   const { n, lp } = factor.symbolic
   forwardSweep(n, lp, li, lx, x)
-  for (let j = 0; j < n; j++) x[j] /= d[j]
+  divideBy(n, d, x)
   backwardSweep(n, lp, li, lx, x)
+}
+
+/** x ← D⁻¹ x. */
+function divideBy(n: number, d: Float64Array, x: Float64Array): void {
+  for (let j = 0; j < n; j++) x[j] /= d[j]
 }
 
 /** x ← L⁻¹ x (unit lower triangle, by columns). */
