@@ -167,8 +167,11 @@ export const PART_CATALOGUE: { [T in PartType]: PartTypeInfo<T> } = {
 /** Part types in catalogue order (palette order). */
 export const PART_TYPE_LIST = Object.keys(PART_CATALOGUE) as PartType[]
 
-/** The terminals a given part actually has: bus bars up to their stud count (polarity from the
- * bar), fuse panels up to their number of ways; every other type has its catalogue terminals. */
+/**
+ * The terminals a given part actually has: bus bars up to their stud count (polarity from the
+ * bar), fuse panels up to their number of ways; every other type has its catalogue terminals.
+ * Read-only: the same list is handed out for every part with the same type, studs or ways.
+ */
 export function partTerminals(part: { type: PartType; params: unknown }): TerminalInfo[] {
   const info = PART_CATALOGUE[part.type]
   if (!info) return []
@@ -176,14 +179,24 @@ export function partTerminals(part: { type: PartType; params: unknown }): Termin
   if (part.type === 'bus-bar') {
     const studs = typeof params.studs === 'number' ? params.studs : P.BUS_BAR_MAX_STUDS
     const polarity: TerminalPolarity = params.polarity === 'negative' ? 'negative' : 'positive'
-    return info.terminals.slice(0, studs).map((term) => ({ ...term, polarity }))
+    let lists = BUS_BAR_TERMINALS.get(studs)
+    if (!lists) {
+      const studsOf = (p: TerminalPolarity) => info.terminals.slice(0, studs).map((term) => ({ ...term, polarity: p }))
+      BUS_BAR_TERMINALS.set(studs, (lists = { positive: studsOf('positive'), negative: studsOf('negative') }))
+    }
+    return lists[polarity]
   }
   if (part.type === 'fuse-panel') {
     const ways = typeof params.ways === 'number' ? params.ways : P.FUSE_PANEL_MAX_WAYS
-    return info.terminals.filter((term) => !term.id.startsWith('out') || Number(term.id.slice(3)) <= ways)
+    let list = FUSE_PANEL_TERMINALS.get(ways)
+    if (!list) FUSE_PANEL_TERMINALS.set(ways, (list = info.terminals.filter((term) => !term.id.startsWith('out') || Number(term.id.slice(3)) <= ways)))
+    return list
   }
   return info.terminals
 }
+// One list per stud count (and polarity) and per number of ways: a big design has thousands of bars.
+const BUS_BAR_TERMINALS = new Map<number, Record<'positive' | 'negative', TerminalInfo[]>>()
+const FUSE_PANEL_TERMINALS = new Map<number, TerminalInfo[]>()
 
 export type ParamField = FieldInfo & { key: string }
 

@@ -73,18 +73,16 @@ export function polarityAt(nodes: TerminalNodes, partId: string, terminal: strin
 }
 
 /**
- * The distinct terminal ids of a catalogue list, in order. Lists the catalogue hands out as constants
- * (every part type but bus bars and fuse panels, whose lists are made per part) give one shared,
- * read-only array per list.
+ * The distinct terminal ids of a catalogue list, in order: one shared, read-only array per list (the
+ * catalogue hands out the same list for every part of a type, stud count or number of ways).
  */
 const IDS_OF_LIST = new WeakMap<TerminalInfo[], string[]>()
 const SHARED_IDS = new WeakSet<string[]>()
-function distinctIds(terminals: TerminalInfo[], constantList: boolean): string[] {
-  const known = constantList ? IDS_OF_LIST.get(terminals) : undefined
+function distinctIds(terminals: TerminalInfo[]): string[] {
+  const known = IDS_OF_LIST.get(terminals)
   if (known) return known
   const ids: string[] = []
   for (const t of terminals) if (!ids.includes(t.id)) ids.push(t.id)
-  if (!constantList) return ids
   IDS_OF_LIST.set(terminals, ids)
   SHARED_IDS.add(ids)
   return ids
@@ -114,7 +112,7 @@ export function buildTerminalNodes(design: Design): TerminalNodes {
     let entry = byPart.get(part.id)
     if (!entry) {
       // The usual case, a part id seen once: its ids (shared per catalogue list) and one slot each.
-      const ids = distinctIds(terminals, part.type !== 'bus-bar' && part.type !== 'fuse-panel')
+      const ids = distinctIds(terminals)
       const slots: number[] = new Array(ids.length)
       for (let i = 0; i < ids.length; i++) {
         slots[i] = slotPart.length // the slot for now; replaced by the node below
