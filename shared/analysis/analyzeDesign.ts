@@ -77,7 +77,7 @@ function analyze(design: Design, options: AnalyzeOptions): AnalysisResult {
     design, profile: design.settings.profile, nominalV: design.settings.nominalVoltageV,
     conductors, conductorById: viewByIndex(nodes.conductorIndex, conductors),
     devices: deviceList, deviceById: viewByIndex(topology.deviceIndex, deviceList),
-    partById: { get: (id) => { const k = partIndex.get(id); return k === undefined ? undefined : design.parts[k] } },
+    partById: viewByIndex(partIndex, design.parts),
     conductorsAtPart: conductorsAt,
     loadDrops: loadDrops(design, solves, topology, conductorsAt), pvGroups, nodes, topology,
     partMaxCurrent: partMaxCurrents(design, solves, partIndex),
