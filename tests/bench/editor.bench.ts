@@ -190,6 +190,8 @@ export async function run(): Promise<void> {
     await page.locator(`.vue-flow__node[data-id="fuse-${group - 1}-2"]`).click({ force: true })
     await page.locator('.inspector [data-field="ratingA"] input').first().waitFor()
     const edits: { ms: number; cpuMs: number }[] = []
+    // The machine may be shared: the load beside the figures says how far to trust them.
+    const loadBefore = os.loadavg()[0]
     for (let k = 0; k < 6; k++) {
       const under = k % 2 === 0
       edits.push(await timeEdit(page, cdp, under ? '1' : '15', under))
@@ -198,6 +200,7 @@ export async function run(): Promise<void> {
     const editCpuMs = edits.map((e) => e.cpuMs)
     console.log(`parameter edit → findings on screen: median ${median(editMs).toFixed(0)} ms (runs: ${editMs.map((v) => v.toFixed(0)).join(', ')}; goal < 100 ms)`)
     console.log(`  renderer main thread busy per edit: median ${median(editCpuMs).toFixed(0)} ms (runs: ${editCpuMs.map((v) => v.toFixed(0)).join(', ')}; the analysis itself runs in a worker)`)
+    console.log(`  load average (1 min) before and after the edits: ${loadBefore.toFixed(2)}, ${os.loadavg()[0].toFixed(2)} on ${os.cpus().length} cores`)
 
     await page.locator('.vue-flow__pane').click({ position: { x: 5, y: 5 } })
     console.log(`panning, whole drawing in view: ${await panFps(page, cdp, 3000)} (goal ≥ 30 fps)`)
