@@ -42,9 +42,9 @@ export async function run(): Promise<void> {
   for (const target of [100, 1_000, 10_000]) {
     const design = generatedDesign(target)
     const big = target >= 10_000
-    const whole = timeMs(() => analyzeDesign(design), big ? 2 : 10, big ? 7 : 21)
+    const whole = timeMs(() => analyzeDesign(design), big ? 3 : 10, big ? 15 : 21)
     const circuits = design.scenarios.map((s) => compileCircuit(design, s).circuit)
-    const op = timeMs(() => { for (const c of circuits) solveOperatingPoint(c) }, big ? 2 : 10, big ? 7 : 21)
+    const op = timeMs(() => { for (const c of circuits) solveOperatingPoint(c) }, big ? 3 : 10, big ? 15 : 21)
     const result = analyzeDesign(design)
     rows.push([
       String(design.parts.length), String(design.conductors.length), String(design.scenarios.length),
