@@ -17,6 +17,8 @@ import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../helpers/browser'
 const ROOT = path.resolve(import.meta.dirname, '../..')
 // 10 parts per group → 500, plus the bank and its main fuse (BENCH_GROUPS overrides, for a quick look).
 const GROUPS = Number(process.env.BENCH_GROUPS ?? 50)
+/** Parameter edits timed, alternating a rating that raises a finding and one that clears it. */
+const EDITS = 16
 
 /** Bank → main fuse → a chain of positive buses, each feeding four fused loads that return to a
  * negative bus of its own; the negative buses are chained back to the bank. */
@@ -192,13 +194,16 @@ export async function run(): Promise<void> {
     const edits: { ms: number; cpuMs: number }[] = []
     // The machine may be shared: the load beside the figures says how far to trust them.
     const loadBefore = os.loadavg()[0]
-    for (let k = 0; k < 6; k++) {
+    // Sixteen edits, every one counted: the first few after opening run code for the first time, a
+    // median of six was mostly those; the first edit and the slowest tenth are printed on their own.
+    for (let k = 0; k < EDITS; k++) {
       const under = k % 2 === 0
       edits.push(await timeEdit(page, cdp, under ? '1' : '15', under))
     }
     const editMs = edits.map((e) => e.ms)
     const editCpuMs = edits.map((e) => e.cpuMs)
-    console.log(`parameter edit → findings on screen: median ${median(editMs).toFixed(0)} ms (runs: ${editMs.map((v) => v.toFixed(0)).join(', ')}; goal < 100 ms)`)
+    const p90 = [...editMs].sort((a, b) => a - b)[Math.ceil(0.9 * editMs.length) - 1]
+    console.log(`parameter edit → findings on screen: median ${median(editMs).toFixed(0)} ms, first edit ${editMs[0].toFixed(0)} ms, 90th percentile ${p90.toFixed(0)} ms (runs: ${editMs.map((v) => v.toFixed(0)).join(', ')}; goal < 100 ms)`)
     console.log(`  renderer main thread busy per edit: median ${median(editCpuMs).toFixed(0)} ms (runs: ${editCpuMs.map((v) => v.toFixed(0)).join(', ')}; the analysis itself runs in a worker)`)
     console.log(`  load average (1 min) before and after the edits: ${loadBefore.toFixed(2)}, ${os.loadavg()[0].toFixed(2)} on ${os.cpus().length} cores`)
 
