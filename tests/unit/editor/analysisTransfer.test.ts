@@ -1,28 +1,19 @@
 // What travels between the editor and its analysis worker: designs and results sent as changes
 // against the previous message must arrive exactly as they left, through edits, additions,
 // removals and reorderings, with unchanged records keeping their objects on the receiving side.
-import * as Y from 'yjs'
 import { describe, expect, it } from 'vitest'
 import { analyzeDesign } from '@shared/analysis/analyzeDesign'
 import { createDemoDesign } from '@shared/design/demo'
-import type { Design } from '@shared/design/schema'
-import { createDesignMutations, writeDesignToDoc } from '@shared/collab/designYDoc'
-import { createDesignReader } from '@/composables/designDocReader'
 import { newPart } from '@/components/editor/model/partFactory'
 import { createDesignDecoder, createDesignEncoder } from '@/workers/designTransfer'
 import { createResultDecoder, createResultEncoder } from '@/workers/resultTransfer'
 import { createListDecoder, createListEncoder } from '@/workers/listDelta'
+import { demoDocSnapshots } from './demoDocSnapshots'
 
 /** The demo design in a Y.Doc, and every snapshot the editor would take of it. */
 function editedDemo() {
-  const doc = new Y.Doc()
-  writeDesignToDoc(doc, createDemoDesign())
-  const read = createDesignReader(doc)
-  const designs: Design[] = [read()]
-  doc.on('afterTransaction', (t: Y.Transaction) => {
-    if (t.changed.size > 0) designs.push(read(t.changed))
-  })
-  return { designs, mutate: createDesignMutations(doc) }
+  const { snapshots, mutate } = demoDocSnapshots()
+  return { designs: snapshots, mutate }
 }
 
 describe('list changes', () => {

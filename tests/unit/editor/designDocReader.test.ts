@@ -4,24 +4,17 @@
 import * as Y from 'yjs'
 import { describe, expect, it } from 'vitest'
 import { createDemoDesign } from '@shared/design/demo'
-import type { Design } from '@shared/design/schema'
-import { createDesignMutations, readDesignFromDoc, replaceDesignInDoc, writeDesignToDoc } from '@shared/collab/designYDoc'
-import { createDesignReader } from '@/composables/designDocReader'
+import { createDesignMutations, readDesignFromDoc, replaceDesignInDoc } from '@shared/collab/designYDoc'
 import { newPart } from '@/components/editor/model/partFactory'
+import { demoDocSnapshots } from './demoDocSnapshots'
 
 /** A doc with the demo design and a reader that re-reads after every transaction. */
 function watchedDoc() {
-  const doc = new Y.Doc()
-  writeDesignToDoc(doc, createDemoDesign())
-  const read = createDesignReader(doc)
-  const snapshots: Design[] = [read()]
-  doc.on('afterTransaction', (transaction: Y.Transaction) => {
-    if (transaction.changed.size > 0) snapshots.push(read(transaction.changed))
-  })
+  const { doc, snapshots, mutate } = demoDocSnapshots()
   const latest = () => snapshots[snapshots.length - 1]
   /** Same content and same key order as a full read. */
   const expectFullRead = () => expect(JSON.stringify(latest())).toBe(JSON.stringify(readDesignFromDoc(doc)))
-  return { doc, mutate: createDesignMutations(doc), snapshots, latest, expectFullRead }
+  return { doc, mutate, snapshots, latest, expectFullRead }
 }
 
 describe('incremental design reader', () => {
