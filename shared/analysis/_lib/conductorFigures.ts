@@ -1,7 +1,7 @@
 import { resistancePerMetreOhm } from '../../conductors/resistance'
 import type { Conductor, DesignSettings } from '../../design/schema'
 import { finite } from './finite'
-import { TupleMemo } from './tupleMemo'
+import { TupleMemo } from '../../tupleMemo'
 
 /**
  * Conductor temperature used for its resistance: the conductor's ambient (or the design default).

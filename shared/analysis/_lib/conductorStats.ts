@@ -9,7 +9,7 @@ import { conductorOhm, conductorTemperatureC } from './conductorFigures'
 import type { PassiveCircuit } from './passiveCircuit'
 import { finite } from './finite'
 import { viewByIndex, type IdLookup } from './idLookup'
-import { TupleMemo } from './tupleMemo'
+import { TupleMemo } from '../../tupleMemo'
 
 type AmpacityFigure = { result: AmpacityResult | null; source: string }
 /** Ampacity figures of one analysis, by their inputs (see ampacityOf). */

@@ -1,6 +1,6 @@
 import { maxOcpdA, type MaxOcpdResult } from '../../conductors/maxOcpd'
 import type { Conductor, Design } from '../../design/schema'
-import { TupleMemo } from './tupleMemo'
+import { TupleMemo } from '../../tupleMemo'
 import { DEVICE_FAMILY_IDS, type DeviceFamilyId } from '../../protection/ratings'
 
 export function familyId(family: string): DeviceFamilyId | undefined {

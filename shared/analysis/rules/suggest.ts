@@ -1,6 +1,6 @@
 import { circuitDrop } from '../../conductors/voltageDrop'
 import { ampacityOf, type AmpacityMemo } from '../_lib/conductorStats'
-import { TupleMemo } from '../_lib/tupleMemo'
+import { TupleMemo } from '../../tupleMemo'
 import { conductorSizeLabel, getConductorSize, sizesInOrder } from '../../conductors/sizes'
 import { nextStandardRatingA, nearestStandardRatingAtMost } from '../../protection/ratings'
 import { familyId } from '../_lib/ocpdLimit'

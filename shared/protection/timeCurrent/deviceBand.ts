@@ -1,6 +1,7 @@
 import { logLogTimeS, logSpace } from './_lib/logLog'
 import { getTimeCurrentFamily } from './families'
 import type { AnchorPoint, BandDefinition, ChartPoint, DeviceBand } from './types'
+import { TupleMemo } from '../../tupleMemo'
 
 /** Charts run from just below the first anchor to this multiple of the rating. */
 const CHART_MAX_MULTIPLE = 100
@@ -20,25 +21,16 @@ export function deviceBand(familyId: string, ratingA: number): DeviceBand {
     throw new RangeError(`Device rating must be a positive number of amperes, got ${String(ratingA)}`)
   }
   // Catalogue bands depend only on (family, rating) and are immutable: the analysis asks for the same
-  // few thousand times per design, so each is built once.
-  // By family, then rating: nested maps, so a look-up builds no key string.
-  let ofFamily = CATALOGUE_BANDS.get(familyId)
-  let band = ofFamily?.get(ratingA)
-  if (band === undefined) {
-    band = bandFromDefinition(familyId, ratingA, getTimeCurrentFamily(familyId).bandAt(ratingA))
-    if (++bandCount > CATALOGUE_BANDS_MAX) {
-      CATALOGUE_BANDS.clear()
-      ofFamily = undefined
-      bandCount = 1
-    }
-    if (!ofFamily) CATALOGUE_BANDS.set(familyId, (ofFamily = new Map()))
-    ofFamily.set(ratingA, band)
-  }
-  return band
+  // few thousand times per design, so each is built once (no key string per look-up).
+  BAND_KEY[0] = familyId
+  BAND_KEY[1] = ratingA
+  const known = CATALOGUE_BANDS.get(BAND_KEY)
+  if (known) return known
+  return CATALOGUE_BANDS.set([familyId, ratingA], bandFromDefinition(familyId, ratingA, getTimeCurrentFamily(familyId).bandAt(ratingA)))
 }
-const CATALOGUE_BANDS = new Map<string, Map<number, DeviceBand>>()
-const CATALOGUE_BANDS_MAX = 2000
-let bandCount = 0
+const CATALOGUE_BANDS = new TupleMemo<DeviceBand>(2000)
+/** Reused look-up key (family, rating). */
+const BAND_KEY: unknown[] = [undefined, undefined]
 
 /** A band from a definition in multiples of `ratingA` (catalogue families and datasheet devices alike). */
 export function bandFromDefinition(familyId: string, ratingA: number, def: BandDefinition): DeviceBand {
