@@ -14,8 +14,8 @@ export interface DesignDelta {
 }
 
 export function createDesignEncoder() {
-  const parts = createListEncoder<Part>((part) => part)
-  const conductors = createListEncoder<Conductor>((conductor) => conductor)
+  const parts = createListEncoder<Part>(Object.is)
+  const conductors = createListEncoder<Conductor>(Object.is)
   let previous: Design | null = null
   return {
     encode(design: Design): DesignDelta {

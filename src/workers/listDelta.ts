@@ -17,21 +17,21 @@ interface Keyed {
 const sameIds = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((id, i) => id === b[i])
 
 /**
- * Encoder for one channel. `signature` says what "unchanged" means: the object itself (the design
- * snapshot keeps unchanged parts' objects) or its JSON (the worker builds a fresh result each run).
+ * Encoder for one channel. `same` says what "unchanged" means: the same object (the design snapshot
+ * keeps unchanged parts' objects) or equal content (the worker builds a fresh result each run).
  */
-export function createListEncoder<T extends Keyed>(signature: (item: T) => unknown) {
+export function createListEncoder<T extends Keyed>(same: (previous: T, next: T) => boolean) {
   let previousIds: string[] | null = null
-  let previous = new Map<string, unknown>()
+  let previous = new Map<string, T>()
   return {
     encode(list: readonly T[]): ListDelta<T> {
       const ids = list.map((item) => item.id)
-      const next = new Map<string, unknown>()
+      const next = new Map<string, T>()
       const changed: T[] = []
       for (const item of list) {
-        const mark = signature(item)
-        next.set(item.id, mark)
-        if (!previous.has(item.id) || previous.get(item.id) !== mark) changed.push(item)
+        const before = previous.get(item.id)
+        next.set(item.id, item)
+        if (before === undefined || !same(before, item)) changed.push(item)
       }
       const repeated = next.size !== ids.length
       const first = previousIds === null

