@@ -29,9 +29,16 @@ interface Candidate {
 }
 
 /** How far a label may be moved from its conductor, in steps of one label height. */
-const RINGS = 8
+export const LABEL_RINGS = 8
 
-const LABEL_HEIGHT = 11
+/** A label's height and how far its backing reaches above the text baseline the spot gives. */
+export interface LabelMetrics {
+  heightPx: number
+  ascentPx: number
+}
+
+/** The exported drawing's 9 px labels. */
+export const EXPORT_LABEL: LabelMetrics = { heightPx: 11, ascentPx: 8 }
 /** Gap kept between a label and a part box or another label. */
 const CLEARANCE = 2
 
@@ -51,8 +58,8 @@ function coveredArea(rect: Rect, others: readonly Rect[]): number {
 }
 
 /** The label of width `w` centred on its baseline point (x, y): its backing rectangle. */
-function rectAt(x: number, y: number, w: number, extraRight: number): Rect {
-  return { x: x - w / 2, y: y - 8, w: w + extraRight, h: LABEL_HEIGHT }
+function rectAt(x: number, y: number, w: number, extraRight: number, m: LabelMetrics): Rect {
+  return { x: x - w / 2, y: y - m.ascentPx, w: w + extraRight, h: m.heightPx }
 }
 
 /**
@@ -60,7 +67,7 @@ function rectAt(x: number, y: number, w: number, extraRight: number): Rect {
  * segment first; above or below a horizontal one, right or left of a vertical one), then a quarter
  * and three quarters along it; then the same moved further out, ring by ring.
  */
-function candidates(points: Point[], w: number): Candidate[] {
+function candidates(points: Point[], w: number, m: LabelMetrics): Candidate[] {
   const segments: { x1: number; y1: number; x2: number; y2: number; length: number; index: number }[] = []
   for (let i = 1; i < points.length; i++) {
     const [x1, y1] = points[i - 1]
@@ -71,14 +78,17 @@ function candidates(points: Point[], w: number): Candidate[] {
   // Longest first; equal lengths keep route order (deterministic output).
   segments.sort((a, b) => b.length - a.length || a.index - b.index)
   const spots: Candidate[] = []
-  for (let ring = 0; ring < RINGS; ring++) {
-    const out = ring * (LABEL_HEIGHT + 1)
+  // Above a horizontal run the backing ends 1 px over the line; below it, it starts 4 px under it.
+  const above = m.heightPx - m.ascentPx + 1
+  const below = m.ascentPx + 4
+  for (let ring = 0; ring < LABEL_RINGS; ring++) {
+    const out = ring * (m.heightPx + 1)
     for (const share of [0.5, 0.25, 0.75]) {
       for (const s of segments) {
         const x = s.x1 + (s.x2 - s.x1) * share
         const y = s.y1 + (s.y2 - s.y1) * share
         const anchor: Point = [x, y]
-        if (Math.abs(s.y2 - s.y1) < 1e-6) spots.push({ x, y: y - 4 - out, anchor, ring }, { x, y: y + 12 + out, anchor, ring })
+        if (Math.abs(s.y2 - s.y1) < 1e-6) spots.push({ x, y: y - above - out, anchor, ring }, { x, y: y + below + out, anchor, ring })
         else spots.push({ x: x + w / 2 + 3 + out, y, anchor, ring }, { x: x - w / 2 - 3 - out, y, anchor, ring })
       }
     }
@@ -92,15 +102,15 @@ function candidates(points: Point[], w: number): Candidate[] {
  * taken, the one covering the least of parts and other labels. The chosen
  * rectangle is added to `taken`. Greedy, in the order called: the same design gives the same drawing.
  */
-export function placeLabel(points: Point[], w: number, extraRight: number, boxes: readonly Rect[], taken: Rect[]): LabelSpot {
-  const spots = candidates(points, w)
-  if (spots.length === 0) spots.push({ x: points[0][0], y: points[0][1] - 4, anchor: points[0], ring: 0 })
+export function placeLabel(points: Point[], w: number, extraRight: number, boxes: readonly Rect[], taken: Rect[], metrics: LabelMetrics = EXPORT_LABEL): LabelSpot {
+  const spots = candidates(points, w, metrics)
+  if (spots.length === 0) spots.push({ x: points[0][0], y: points[0][1] - (metrics.heightPx - metrics.ascentPx + 1), anchor: points[0], ring: 0 })
   // The first free spot; when none is free, the one covering the least, a label over another label
   // (two texts unreadable) counting double a label over a part.
   let chosen = spots[0]
   let best = Infinity
   for (const spot of spots) {
-    const rect = rectAt(spot.x, spot.y, w, extraRight)
+    const rect = rectAt(spot.x, spot.y, w, extraRight, metrics)
     const cost = coveredArea(rect, boxes) + 2 * coveredArea(rect, taken)
     if (cost < best) {
       best = cost
@@ -108,7 +118,7 @@ export function placeLabel(points: Point[], w: number, extraRight: number, boxes
       if (cost === 0) break
     }
   }
-  const rect = rectAt(chosen.x, chosen.y, w, extraRight)
+  const rect = rectAt(chosen.x, chosen.y, w, extraRight, metrics)
   taken.push(rect)
   return chosen.ring > 0 ? { x: chosen.x, y: chosen.y, rect, leaderTo: chosen.anchor } : { x: chosen.x, y: chosen.y, rect }
 }
