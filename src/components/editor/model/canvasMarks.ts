@@ -34,8 +34,9 @@ export function createCanvasMarks(): CanvasMarks {
   }
 }
 
-/** Makes `target` hold exactly `next`, touching only keys whose value changed (`same` decides). */
-function syncMap<V>(target: Map<string, V>, next: Map<string, V>, same: (a: V, b: V) => boolean = Object.is): void {
+/** Makes `target` hold exactly `next`, touching only keys whose value changed (`same` decides), so
+ * that only what reads a changed key re-renders. */
+export function syncMap<V>(target: Map<string, V>, next: Map<string, V>, same: (a: V, b: V) => boolean = Object.is): void {
   for (const key of target.keys()) if (!next.has(key)) target.delete(key)
   for (const [key, value] of next) {
     const current = target.get(key)
