@@ -1,4 +1,4 @@
-import { computed, shallowReactive, toRaw, watch, type InjectionKey } from 'vue'
+import { shallowReactive, watch, type InjectionKey } from 'vue'
 import type { Rect } from '@shared/export/labelPlacement'
 import { MAX_PLACED_LABELS, placeCanvasLabels, sameSpot, type CanvasLabelSpot, type LabelEntry } from '@/components/editor/model/conductorLabelSpots'
 import { syncMap } from '@/components/editor/model/canvasMarks'
@@ -18,22 +18,35 @@ const sameEntry = (a: LabelEntry, b: LabelEntry) =>
   a.widthPx === b.widthPx && a.points.length === b.points.length && a.points.every((p, i) => p[0] === b.points[i][0] && p[1] === b.points[i][1])
 
 /**
- * The canvas side: placement is worked out again when a reported route or width changes, a part
- * moves, or the conductors change; nothing is read or placed while no conductor reports (far out).
+ * The canvas side. Conductors report while they render (hundreds at once when a drawing opens), so a
+ * report only notes the entry and asks for one placement after the current update: placing inside it
+ * would re-run placement once per conductor, and Vue stops an update that re-triggers itself a
+ * hundred times. Placement runs again when a part moves or the conductors change, and does nothing
+ * while no conductor reports (far out).
  */
 export function useConductorLabelSpots(source: { order: () => readonly string[]; boxes: () => Rect[] }): ConductorLabelSpots {
-  const entries = shallowReactive(new Map<string, LabelEntry>())
+  const entries = new Map<string, LabelEntry>()
   const spots = shallowReactive(new Map<string, CanvasLabelSpot>())
-  const placed = computed(() =>
-    entries.size === 0 || entries.size > MAX_PLACED_LABELS ? new Map<string, CanvasLabelSpot>() : placeCanvasLabels(entries, source.order(), source.boxes()),
-  )
-  watch(placed, (next) => syncMap(spots, next, sameSpot), { immediate: true })
+  let scheduled = false
+  function place(): void {
+    scheduled = false
+    const next = entries.size === 0 || entries.size > MAX_PLACED_LABELS ? new Map<string, CanvasLabelSpot>() : placeCanvasLabels(entries, source.order(), source.boxes())
+    syncMap(spots, next, sameSpot)
+  }
+  function schedule(): void {
+    if (scheduled) return
+    scheduled = true
+    queueMicrotask(place)
+  }
+  watch(() => [source.order(), source.boxes()], schedule)
   function report(id: string, entry: LabelEntry | null): void {
-    // Read untracked: the reporting conductor must not re-run when another one reports.
-    const current = toRaw(entries).get(id)
+    const current = entries.get(id)
     if (entry === null) {
-      if (current) entries.delete(id)
-    } else if (!current || !sameEntry(current, entry)) entries.set(id, entry)
+      if (!current) return
+      entries.delete(id)
+    } else if (current && sameEntry(current, entry)) return
+    else entries.set(id, entry)
+    schedule()
   }
   return { report, spots }
 }
