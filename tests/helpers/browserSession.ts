@@ -13,7 +13,7 @@ export interface BrowserSession {
   server: TestServer
   context: BrowserContext
   page: Page
-  /** Uncaught errors in the page. */
+  /** Uncaught errors in the page, and errors the page logged to its console. */
   pageErrors: string[]
   /** Server answers with status 500 or more. */
   serverErrors: string[]
@@ -55,6 +55,11 @@ export async function startBrowserSession(options: BrowserSessionOptions = {}): 
   const pageErrors: string[] = []
   const serverErrors: string[] = []
   page.on('pageerror', (err) => pageErrors.push(err.message))
+  // The app's error channel logs every render error and unhandled rejection before it shows the
+  // snackbar; Chromium's own lines for failed requests are expected (a 401 before signing in).
+  page.on('console', (msg) => {
+    if (msg.type() === 'error' && !msg.text().startsWith('Failed to load resource')) pageErrors.push(`console: ${msg.text()}`)
+  })
   page.on('response', (res) => {
     if (res.status() >= 500) serverErrors.push(`${res.request().method()} ${res.url()} → ${res.status()}`)
   })
