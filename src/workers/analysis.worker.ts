@@ -25,9 +25,9 @@ let encodeResult = createResultEncoder()
 /**
  * After a design arrives in full, the worker analyses it again a few times while idle, results
  * thrown away, so that the engine compiles the core's hot functions now rather than during the
- * user's first edits. On the 500-part bench (edit analyses timed in the worker, two runs each) the
- * first three edits took 80–117, 43–66 and 39–60 ms without it and 42–56, 31–54 and 14–19 ms with
- * it. A request that arrives meanwhile waits at most for the run in progress and cancels the rest.
+ * user's first edits. On the 500-part bench (edit analyses timed in the worker) the first three
+ * edits took 80–117, 43–66 and 39–60 ms without it (two runs) and 42–68, 31–54 and 14–53 ms with it
+ * (four runs); warm, an edit takes 11–21 ms. A request that arrives meanwhile waits at most for the run in progress and cancels the rest.
  * A design whose first analysis took longer than WARM_UP_MAX_MS is left alone: its loops ran long
  * enough to be compiled during that run, and a warm-up run would hold up an edit as long.
  */
