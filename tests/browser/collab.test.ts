@@ -89,7 +89,8 @@ describe('two people on one design', () => {
     await poll(() => designer.locator('[data-testid="revision-list"] .v-list-item').count()).toBe(2)
     for (const [label, revision] of [['From', 'Issued for review'], ['To', 'As built']]) {
       await designer.locator('[data-testid="revisions-dialog"] .v-select').filter({ hasText: label }).click()
-      await designer.locator('.v-select__content .v-list-item').filter({ hasText: revision }).click()
+      // This select's own list: the other one's may still be closing, with the same options in it.
+      await designer.getByRole('listbox', { name: label, exact: true }).getByRole('option', { name: revision }).click()
     }
     await designer.getByRole('button', { name: 'Compare' }).click()
     await poll(() => designer.locator('[data-testid="revision-comparison"]').textContent()).toContain('Parts added (1)')
