@@ -2,6 +2,7 @@ import { ref, shallowReactive, watch, type InjectionKey } from 'vue'
 import type { Rect } from '@shared/export/labelPlacement'
 import { MAX_PLACED_LABELS, placeCanvasLabels, sameSpot, type CanvasLabelSpot, type LabelEntry } from '@/components/editor/model/conductorLabelSpots'
 import { syncMap } from '@/components/editor/model/canvasMarks'
+import { sameList } from '@/utils/sameList'
 
 /** What the canvas shares with its conductors: each reports its route and label width, and reads
  * back where its label goes. */
@@ -14,8 +15,7 @@ export interface ConductorLabelSpots {
 
 export const CONDUCTOR_LABEL_SPOTS: InjectionKey<ConductorLabelSpots> = Symbol('conductorLabelSpots')
 
-const sameEntry = (a: LabelEntry, b: LabelEntry) =>
-  a.widthPx === b.widthPx && a.points.length === b.points.length && a.points.every((p, i) => p[0] === b.points[i][0] && p[1] === b.points[i][1])
+const sameEntry = (a: LabelEntry, b: LabelEntry) => a.widthPx === b.widthPx && sameList(a.points, b.points, (p, q) => p[0] === q[0] && p[1] === q[1])
 
 /**
  * The canvas side. Conductors report while they render (hundreds at once when a drawing opens), so a

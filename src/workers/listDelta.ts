@@ -4,6 +4,8 @@
 // than the rest of the round trip on a slow machine. Each side keeps the previous list; the
 // receiver's unchanged records keep their objects, so what reads them can compare by identity.
 
+import { sameList } from '@/utils/sameList'
+
 export type ListDelta<T> =
   /** The whole list (the first one, or one with repeated ids). */
   | { full: T[] }
@@ -13,8 +15,6 @@ export type ListDelta<T> =
 interface Keyed {
   id: string
 }
-
-const sameIds = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((id, i) => id === b[i])
 
 /**
  * Encoder for one channel. `same` says what "unchanged" means: the same object (the design snapshot
@@ -35,7 +35,7 @@ export function createListEncoder<T extends Keyed>(same: (previous: T, next: T) 
       }
       const repeated = next.size !== ids.length
       const first = previousIds === null
-      const order = previousIds !== null && sameIds(previousIds, ids) ? null : ids
+      const order = previousIds !== null && sameList(previousIds, ids) ? null : ids
       previousIds = repeated ? null : ids
       previous = repeated ? new Map() : next
       return first || repeated ? { full: [...list] } : { ids: order, changed }
