@@ -137,3 +137,20 @@ export function validateParamEdit(schema: z.ZodType, params: Record<string, unkn
   }
   return null
 }
+
+export interface FieldHandlers {
+  validate: (value: unknown) => string | null
+  commit: (value: unknown) => void
+}
+
+/**
+ * One validator and one commit handler per field key, made once: a side form that handed its fields
+ * new functions on every render would re-render every field on each edit, not only the changed one.
+ */
+export function fieldHandlersOf(
+  keys: readonly string[],
+  validate: (key: string, value: unknown) => string | null,
+  commit: (key: string, value: unknown) => void,
+): Record<string, FieldHandlers> {
+  return Object.fromEntries(keys.map((key) => [key, { validate: (value: unknown) => validate(key, value), commit: (value: unknown) => commit(key, value) }]))
+}
